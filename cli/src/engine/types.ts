@@ -1,0 +1,244 @@
+/**
+ * Types shared by every part of the engine. Numbers are plain JavaScript numbers in the unit system
+ * of the calc file they came from:
+ *
+ * | unit system | length | area | stress | force |
+ * |-------------|--------|------|--------|-------|
+ * | `in`        | in     | in²  | ksi    | kip   |
+ * | `mm`        | mm     | mm²  | MPa    | kN    |
+ *
+ * (MPa·mm² = N, so forces in an `mm` calc are divided by 1000 to give kN.)
+ *
+ * Coordinates: `x` runs along the load axis, `y` across the width from one longitudinal edge,
+ * 0 ≤ y ≤ width.
+ */
+
+/** Unit system of a calc file. */
+export type UnitSystem = 'in' | 'mm';
+
+/**
+ * Where the tension comes from. `-x`: the member is pulled at its −x end toward −x, so the loaded
+ * side of any fracture line is its −x side and every hole not in the chain must lie strictly on the
+ * +x side. `+x` is the mirror image.
+ */
+export type LoadDirection = '-x' | '+x';
+
+/** Design code profiles the engine knows. */
+export type CodeStandard = 'AISC 360-22' | 'AISC 360-16' | 'AISC 360-10';
+
+/** Design method: load and resistance factor design or allowable strength design. */
+export type DesignMethod = 'LRFD' | 'ASD';
+
+export type MemberKind = 'plate' | 'splice-plate' | 'gusset';
+
+export type HoleType = 'standard' | 'oversized' | 'short-slotted' | 'long-slotted';
+
+/** Orientation of a slot's long dimension relative to the load axis. */
+export type SlotOrientation = 'along' | 'across';
+
+/** The code profile a member is checked under. */
+export interface CodeProfile {
+  readonly standard: CodeStandard;
+  readonly method: DesignMethod;
+  readonly units: UnitSystem;
+}
+
+/** A hole as the engine sees it, after the calc file has been parsed and normalised. */
+export interface HoleInput {
+  readonly id: string;
+  readonly x: number;
+  readonly y: number;
+  /** Nominal bolt diameter (in or mm). Absent when only an explicit dimension is given. */
+  readonly boltDiameter?: number;
+  readonly type: HoleType;
+  /** Required for slotted holes. */
+  readonly slot?: SlotOrientation;
+  /**
+   * Explicit nominal hole dimensions, replacing the code's hole table: `width` across the load,
+   * `length` along the load (equal for round holes). The damage allowance is still added.
+   */
+  readonly dimension?: { readonly across: number; readonly along: number };
+}
+
+export interface MaterialInput {
+  readonly grade?: string;
+  /** Specified minimum yield stress (ksi or MPa). */
+  readonly Fy: number;
+  /** Specified minimum tensile strength (ksi or MPa). */
+  readonly Fu: number;
+}
+
+/** A member as the engine sees it. */
+export interface MemberInput {
+  readonly id: string;
+  readonly kind: MemberKind;
+  /** Gross width across the load. */
+  readonly width: number;
+  readonly thickness: number;
+  readonly material: MaterialInput;
+  readonly holes: readonly HoleInput[];
+  /** One or both directions, no repeats. */
+  readonly directions: readonly LoadDirection[];
+  /** Shear lag factor; the engine uses 1.0 for plates (AISC 360 Table D3.1 case 1) when absent. */
+  readonly U?: number;
+  /** Required strength (Pu for LRFD, Pa for ASD), kip or kN. */
+  readonly requiredStrength?: number;
+}
+
+/** Hole width the engine deducts, with how it was found. */
+export interface HoleWidth {
+  readonly holeId: string;
+  /** Nominal dimension across the load, from the table or given explicitly. */
+  readonly nominalAcross: number;
+  /** Nominal dimension along the load. */
+  readonly nominalAlong: number;
+  /** Damage allowance added for net area (AISC 360 B4.3b). */
+  readonly allowance: number;
+  /** nominalAcross + allowance: the width deducted in net area. */
+  readonly deducted: number;
+  readonly source: 'table' | 'explicit';
+}
+
+/** One gauge space of a chain: a leg between two consecutive holes of the chain. */
+export interface ChainLeg {
+  readonly from: string;
+  readonly to: string;
+  /** Stagger (pitch offset) along the load, always ≥ 0. */
+  readonly s: number;
+  /** Gauge across the load, always > 0. */
+  readonly g: number;
+  /** s²/(4g). */
+  readonly term: number;
+}
+
+/** A chain of holes crossing the member, holes in order of increasing y. */
+export interface Chain {
+  readonly holes: readonly string[];
+  readonly legs: readonly ChainLeg[];
+  /** Σ deducted hole widths. */
+  readonly deducted: number;
+  /** Σ s²/4g. */
+  readonly staggerSum: number;
+  /** width − deducted + staggerSum. */
+  readonly netWidth: number;
+  /** netWidth · thickness. */
+  readonly netArea: number;
+}
+
+/** Why a chain cannot fracture under the full load from a direction. */
+export interface ChainRejection {
+  readonly direction: LoadDirection;
+  /** The first hole (in y order) found on the loaded side of, or exactly on, the fracture line. */
+  readonly blockingHole: string;
+  readonly reason: 'loaded-side' | 'on-line';
+}
+
+/** A chain with its standing in each direction asked for. */
+export interface RankedChain extends Chain {
+  /** Directions in which this chain can form under the full load. */
+  readonly admissible: readonly LoadDirection[];
+  /** One entry per direction in which it cannot. */
+  readonly rejections: readonly ChainRejection[];
+}
+
+/** Equal-share check (DOMAIN §4): each fastener takes an equal share of the load. */
+export interface ShareCheck {
+  readonly direction: LoadDirection;
+  /** Chain with the least An / share over all chains. */
+  readonly chain: Chain;
+  /** Fasteners in the chain or on its far side. */
+  readonly fastenersCarried: number;
+  readonly fastenersTotal: number;
+  /** fastenersCarried / fastenersTotal. */
+  readonly share: number;
+  /** netArea / share: the area that would be needed under the full load to match this chain. */
+  readonly equivalentArea: number;
+}
+
+/** Net section for one load direction. */
+export interface DirectionResult {
+  readonly direction: LoadDirection;
+  /** Least admissible chain, or null when no chain can form (no holes, or every chain blocked). */
+  readonly governing: Chain | null;
+  /** The k least admissible chains, ascending by net width, distinct. */
+  readonly leastChains: readonly Chain[];
+  /** min(governing net area, Ag). */
+  readonly An: number;
+  readonly share: ShareCheck | null;
+}
+
+export type LimitState = 'yielding' | 'rupture';
+
+export interface Strength {
+  readonly limitState: LimitState;
+  /** Nominal strength Pn. */
+  readonly nominal: number;
+  /** φ (LRFD) or Ω (ASD). */
+  readonly factor: number;
+  /** φPn (LRFD) or Pn/Ω (ASD): the design or allowable strength. */
+  readonly available: number;
+}
+
+/** Everything the engine computes for a member. */
+export interface MemberResult {
+  readonly memberId: string;
+  readonly Ag: number;
+  readonly holeWidths: readonly HoleWidth[];
+  readonly directions: readonly DirectionResult[];
+  /** min over directions of An. */
+  readonly An: number;
+  /** Direction whose An governs. */
+  readonly governingDirection: LoadDirection;
+  readonly U: number;
+  /** An·U, capped at 0.85 Ag for splice and gusset plates (AISC 360 J4.1). */
+  readonly Ae: number;
+  /** True when the 0.85 Ag cap governed Ae. */
+  readonly capped: boolean;
+  readonly yielding: Strength;
+  readonly rupture: Strength;
+  /** The lesser of the two available strengths. */
+  readonly governing: Strength;
+  /** requiredStrength / governing.available, when a required strength is given. */
+  readonly utilisation?: number;
+}
+
+export type Severity = 'error' | 'warning' | 'note';
+
+/**
+ * Finding classes, in the order a checker reads them. `overstated`: the submission claims more area
+ * or strength than the recomputation gives (unsafe). `understated`: it claims less (conservative).
+ * `missed-chain`: the governing chain was not among those claimed. `phantom-chain`: a claimed chain
+ * cannot form for the load direction, or does not exist. `chain-width`: a claimed chain's net width
+ * differs. `equal-share`: the equal-share check falls below the full-load An. `detailing`: hole
+ * layout, spacing and edge distance. `input`: the file itself.
+ */
+export type FindingClass =
+  | 'overstated'
+  | 'understated'
+  | 'missed-chain'
+  | 'phantom-chain'
+  | 'chain-width'
+  | 'equal-share'
+  | 'detailing'
+  | 'input';
+
+export interface Finding {
+  /** Stable code of our own, e.g. `LG101`. */
+  readonly code: string;
+  /** Stable kebab-case name of the code, e.g. `overstated-net-area`. */
+  readonly name: string;
+  readonly class: FindingClass;
+  readonly severity: Severity;
+  readonly memberId?: string;
+  readonly direction?: LoadDirection;
+  /** Hole ids of the chain concerned, if any. */
+  readonly chain?: readonly string[];
+  /** Hole ids concerned (detailing). */
+  readonly holes?: readonly string[];
+  readonly claimed?: number;
+  readonly recomputed?: number;
+  /** One line an engineer would accept, with the numbers. */
+  readonly message: string;
+  /** JSON pointer into the calc file of the value the finding is about. */
+  readonly pointer: string;
+}
