@@ -14,7 +14,14 @@ export default tseslint.config(
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: [{ group: ['node:*', 'fs', 'path', 'os', 'child_process'], message: 'The engine is pure and isomorphic.' }] },
+        {
+          patterns: [
+            {
+              group: ['node:*', 'fs', 'path', 'os', 'child_process'],
+              message: 'The engine is pure and isomorphic.',
+            },
+          ],
+        },
       ],
       'no-restricted-globals': ['error', 'process', 'Buffer', '__dirname', 'require'],
     },
