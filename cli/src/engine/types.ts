@@ -242,3 +242,80 @@ export interface Finding {
   /** JSON pointer into the calc file of the value the finding is about. */
   readonly pointer: string;
 }
+
+/**
+ * A hole placed in a member, reduced to what the chain search needs: its position, its index in the
+ * member's `holes` array (for JSON pointers) and the width it deducts (see {@link HoleWidth}).
+ */
+export interface PlacedHole {
+  readonly id: string;
+  /** Index in the member's `holes` array. */
+  readonly index: number;
+  readonly x: number;
+  readonly y: number;
+  /** Width deducted in net area: nominal dimension across the load plus the damage allowance. */
+  readonly deducted: number;
+}
+
+/** The holes of a member with the plate they sit in: the input of every chain search. */
+export interface HoleLayout {
+  /** Gross width across the load. */
+  readonly width: number;
+  readonly thickness: number;
+  readonly holes: readonly PlacedHole[];
+}
+
+/** Where every hole lies relative to a chain's fracture line for a load direction. */
+export interface FractureSides {
+  readonly direction: LoadDirection;
+  /** Holes in the chain. */
+  readonly chain: readonly string[];
+  /** Holes strictly on the loaded side (they would still push on the freed piece). */
+  readonly loaded: readonly string[];
+  /** Holes exactly on the fracture line without being in the chain. */
+  readonly onLine: readonly string[];
+  /** Holes strictly on the far (non-loaded) side. */
+  readonly far: readonly string[];
+}
+
+/** Why a list of hole ids is not a chain at all. */
+export interface ChainDefect {
+  readonly reason: 'empty' | 'unknown-hole' | 'same-gauge-line' | 'out-of-order' | 'repeated-hole';
+  /** Position in the list of the first offending id (0 for `empty`). */
+  readonly position: number;
+  readonly holeId?: string;
+  readonly message: string;
+}
+
+/** Options of {@link analyseMember}. */
+export interface AnalyseOptions {
+  /** How many least chains to keep per direction (default 10). */
+  readonly k?: number;
+  /** Only these directions (default: the member's own). */
+  readonly directions?: readonly LoadDirection[];
+}
+
+/** A problem with the member's input itself (LG3xx), found before any analysis. */
+export interface InputIssue {
+  readonly code: string;
+  readonly name: string;
+  /** Rule name as the loader reports it in a CalcError (the same as `name`). */
+  readonly rule: string;
+  readonly message: string;
+  /** JSON pointer suffix relative to the member, e.g. `/holes/3` or `/holes/3/id`. */
+  readonly pointer: string;
+  /** Hole ids concerned. */
+  readonly holes: readonly string[];
+}
+
+/** One entry of the finding catalogue: what a code means, for SARIF rules, docs and the dashboard. */
+export interface FindingRule {
+  readonly code: string;
+  readonly name: string;
+  readonly class: FindingClass;
+  /** Default severity; some codes are raised or lowered case by case (see `help`). */
+  readonly severity: Severity;
+  readonly title: string;
+  /** Two or three sentences for an engineer. */
+  readonly help: string;
+}

@@ -1,0 +1,49 @@
+import type { UnitSystem } from './types.js';
+
+// AISC 360-16 Table J3.4, Minimum Edge Distance from Center of Standard Hole to Edge of Connected
+// Part, in: published (as listed in REFERENCES.md). The 2022 edition keeps it; the 2010 edition had a
+// second column for sheared edges (memory), which this engine does not model.
+const INCH: readonly (readonly [number, number])[] = [
+  [0.5, 0.75],
+  [0.625, 0.875],
+  [0.75, 1],
+  [0.875, 1.125],
+  [1, 1.25],
+  [1.125, 1.5],
+  [1.25, 1.625],
+];
+
+// AISC 360-16 Table J3.4M, mm: published.
+const METRIC: readonly (readonly [number, number])[] = [
+  [16, 22],
+  [20, 26],
+  [22, 28],
+  [24, 30],
+  [27, 34],
+  [30, 38],
+  [36, 46],
+];
+
+const SAME_SIZE = 1e-6;
+
+/**
+ * Minimum edge distance from the centre of a standard hole to the edge of the connected part
+ * (AISC 360 Table J3.4 / J3.4M), or `undefined` for a bolt size the table does not list.
+ *
+ * @param boltDiameter - nominal bolt diameter, in or mm
+ * @param units - unit system of the diameter
+ * @returns the minimum edge distance in the same unit
+ * @example
+ * minimumEdgeDistance(0.75, 'in') // → 1
+ * minimumEdgeDistance(1.5, 'in')  // → 1.875 (over 1-1/4 in: 1.25d)
+ * minimumEdgeDistance(20, 'mm')   // → 26
+ */
+export function minimumEdgeDistance(boltDiameter: number, units: UnitSystem): number | undefined {
+  const table = units === 'in' ? INCH : METRIC;
+  const row = table.find(([d]) => Math.abs(d - boltDiameter) < SAME_SIZE);
+  if (row) return row[1];
+  const last = table[table.length - 1];
+  // "Over 1-1/4 in" / "over M36": 1.25d.
+  if (last && boltDiameter > last[0] + SAME_SIZE) return 1.25 * boltDiameter;
+  return undefined;
+}
