@@ -1,0 +1,129 @@
+import { formatDirection } from './formatDirection.js';
+import { formatQuantity } from './formatQuantity.js';
+import { makeFinding } from './makeFinding.js';
+import { minimumEdgeDistance } from './minimumEdgeDistance.js';
+import { segmentDistance, type Point } from './segmentDistance.js';
+import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js';
+
+/**
+ * Detailing findings a checker also looks at (DOMAIN §7):
+ * - LG201: centre-to-centre spacing below 2-2/3 d (AISC 360 J3.3), d the larger bolt of the pair;
+ * - LG202: edge distance across the load (y to each longitudinal edge) below AISC 360 Table J3.4 /
+ *   J3.4M. Edge distance along the load needs the plate ends, which calc files do not carry, so it is
+ *   not checked; nor are the Table J3.5 increments for oversized and slotted holes;
+ * - LG203: the fracture line of a governing chain passing within a hole's radius (deducted width / 2)
+ *   of a hole it does not deduct.
+ * Holes given only by an explicit dimension (no bolt) are skipped for LG201 and LG202.
+ *
+ * @param member - the member
+ * @param profile - units for the tables
+ * @param result - the member's analysis (for the governing chains)
+ * @param memberPointer - JSON pointer of the member, prefixed to each finding's pointer
+ * @returns the findings
+ * @example
+ * // two 3/4 in bolts 1.75 in apart: 2-2/3 · 0.75 = 2.00 in
+ * detailingFindings(member, profile, result, '/members/0')[0]?.code // → 'LG201'
+ */
+export function detailingFindings(
+  member: MemberInput,
+  profile: CodeProfile,
+  result: MemberResult,
+  memberPointer = '',
+): Finding[] {
+  const findings: Finding[] = [];
+  const u = profile.units;
+  const holes = member.holes;
+  const eps = 1e-9 * Math.max(1, member.width);
+
+  // AISC 360 J3.3: minimum spacing 2-2/3 d between centres.
+  const largest = Math.max(0, ...holes.map((h) => h.boltDiameter ?? 0));
+  const order = holes.map((_, i) => i).sort((a, b) => holes[a]!.y - holes[b]!.y || a - b);
+  for (let p = 0; p < order.length; p += 1) {
+    const a = holes[order[p]!]!;
+    for (let q = p + 1; q < order.length; q += 1) {
+      const b = holes[order[q]!]!;
+      if (b.y - a.y >= (8 / 3) * largest) break;
+      const d = Math.max(a.boltDiameter ?? 0, b.boltDiameter ?? 0);
+      if (d === 0) continue;
+      const minimum = (8 / 3) * d;
+      const distance = Math.hypot(b.x - a.x, b.y - a.y);
+      if (distance < minimum - eps) {
+        const later = Math.max(order[p]!, order[q]!);
+        const [first, second] = order[p]! < order[q]! ? [a, b] : [b, a];
+        findings.push(
+          makeFinding('LG201', {
+            memberId: member.id,
+            holes: [first.id, second.id],
+            claimed: distance,
+            recomputed: minimum,
+            message: `Holes ${first.id} and ${second.id} are ${formatQuantity(distance, 'length', u)} apart centre to centre, below 2-2/3 d = ${formatQuantity(minimum, 'length', u)} (AISC 360 J3.3)`,
+            pointer: `${memberPointer}/holes/${later}`,
+          }),
+        );
+      }
+    }
+  }
+
+  // AISC 360 Table J3.4 / J3.4M: minimum edge distance, measured across the load.
+  holes.forEach((hole, i) => {
+    if (hole.boltDiameter === undefined) return;
+    const minimum = minimumEdgeDistance(hole.boltDiameter, u);
+    if (minimum === undefined) return;
+    const edge = Math.min(hole.y, member.width - hole.y);
+    if (edge < minimum - eps) {
+      findings.push(
+        makeFinding('LG202', {
+          memberId: member.id,
+          holes: [hole.id],
+          claimed: edge,
+          recomputed: minimum,
+          message: `Hole ${hole.id} is ${formatQuantity(edge, 'length', u)} from the ${hole.y <= member.width - hole.y ? 'y = 0' : 'y = width'} edge, below the ${formatQuantity(minimum, 'length', u)} of AISC 360 Table ${u === 'in' ? 'J3.4' : 'J3.4M'}`,
+          pointer: `${memberPointer}/holes/${i}/y`,
+        }),
+      );
+    }
+  });
+
+  // LG203: a governing fracture line grazing a hole it does not deduct.
+  const deducted = new Map(result.holeWidths.map((w, i) => [i, w.deducted] as const));
+  const seen = new Set<string>();
+  for (const d of result.directions) {
+    const chain = d.governing;
+    if (!chain) continue;
+    const key = chain.holes.join('\u0000');
+    if (seen.has(key)) continue;
+    seen.add(key);
+    const inChain = new Set(chain.holes);
+    const points: Point[] = [];
+    const chainHoles = chain.holes.map((id) => holes.find((h) => h.id === id)!);
+    const first = chainHoles[0]!;
+    const last = chainHoles[chainHoles.length - 1]!;
+    points.push({ x: first.x, y: 0 });
+    for (const h of chainHoles) points.push({ x: h.x, y: h.y });
+    points.push({ x: last.x, y: member.width });
+    holes.forEach((hole, i) => {
+      if (inChain.has(hole.id)) return;
+      const radius = (deducted.get(i) ?? 0) / 2;
+      const centre = { x: hole.x, y: hole.y };
+      let distance = Number.POSITIVE_INFINITY;
+      for (let s = 1; s < points.length; s += 1) {
+        distance = Math.min(distance, segmentDistance(points[s - 1]!, points[s]!, centre, centre));
+      }
+      if (distance < radius - eps) {
+        findings.push(
+          makeFinding('LG203', {
+            memberId: member.id,
+            direction: d.direction,
+            chain: chain.holes,
+            holes: [hole.id],
+            claimed: distance,
+            recomputed: radius,
+            message: `The governing fracture line (chain ${chain.holes.join('-')}, ${formatDirection(d.direction)}) passes ${formatQuantity(distance, 'length', u)} from the centre of hole ${hole.id}, within its radius ${formatQuantity(radius, 'length', u)}`,
+            pointer: `${memberPointer}/holes/${i}`,
+          }),
+        );
+      }
+    });
+  }
+  return findings;
+}

@@ -1,0 +1,32 @@
+// The net-section engine: pure functions, numbers in, typed results out. Re-exported one by one so
+// the public surface is visible here.
+export type * from './types.js';
+export { EngineError, type EngineErrorCode } from './engineError.js';
+export { ENGINE_VERSION } from './engineVersion.js';
+export { FINDING_CATALOGUE } from './findingCatalogue.js';
+export { findingRule } from './findingRule.js';
+export { holeTableInch, type HoleTableRow } from './holeTableInch.js';
+export { holeTableMetric } from './holeTableMetric.js';
+export { minimumEdgeDistance } from './minimumEdgeDistance.js';
+export { holeWidth } from './holeWidth.js';
+export { staggerTerm } from './staggerTerm.js';
+export { netWidth } from './netWidth.js';
+export { memberLayout } from './memberLayout.js';
+export { layoutTolerance } from './layoutTolerance.js';
+export { gaugeLines, type GaugeLines } from './gaugeLines.js';
+export { chainDefect } from './chainDefect.js';
+export { chainOf } from './chainOf.js';
+export { fractureSides } from './fractureSides.js';
+export { chainRejection } from './chainRejection.js';
+export { enumerateChains, type EnumerateOptions } from './enumerateChains.js';
+export { leastChains } from './leastChains.js';
+export { rankChains } from './rankChains.js';
+export { shareCheck } from './shareCheck.js';
+export { analyseMember } from './analyseMember.js';
+export { inspectLayout } from './inspectLayout.js';
+export { detailingFindings } from './detailingFindings.js';
+export { withinTolerance, DEFAULT_TOLERANCE, type ToleranceSpec } from './withinTolerance.js';
+export { formatQuantity, type Dimension } from './formatQuantity.js';
+export { formatDirection } from './formatDirection.js';
+export { auditMember } from './auditMember.js';
+export { auditCalc } from './auditCalc.js';

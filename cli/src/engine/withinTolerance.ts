@@ -1,0 +1,37 @@
+import type { Dimension } from './formatQuantity.js';
+
+/** Comparison tolerance (the same shape as the calc layer's `Tolerance`). */
+export interface ToleranceSpec {
+  /** Relative tolerance, 0.005 = 0.5 %. */
+  readonly relative: number;
+  /** Absolute tolerances by dimension; when given they replace `relative` for that dimension. */
+  readonly absolute?: { readonly length?: number; readonly area?: number; readonly force?: number };
+}
+
+/** Default comparison tolerance: 0.5 % relative. */
+export const DEFAULT_TOLERANCE: ToleranceSpec = { relative: 0.005 };
+
+/**
+ * Whether a claimed value agrees with the recomputed one: |claimed − recomputed| ≤ the absolute
+ * tolerance for the dimension when one is given, else ≤ relative · |recomputed|.
+ *
+ * @param claimed - the submitted value
+ * @param recomputed - the engine's value
+ * @param dimension - what the value measures (ratios always compare relatively)
+ * @param tolerance - the tolerance (default 0.5 %)
+ * @returns true when the two agree
+ * @example
+ * withinTolerance(5.75, 5.7708, 'area')                                        // → true (0.36 %)
+ * withinTolerance(6.1, 5.7708, 'area')                                         // → false
+ * withinTolerance(5.75, 5.7708, 'area', { relative: 0, absolute: { area: 0.01 } }) // → false
+ */
+export function withinTolerance(
+  claimed: number,
+  recomputed: number,
+  dimension: Dimension,
+  tolerance: ToleranceSpec = DEFAULT_TOLERANCE,
+): boolean {
+  const absolute = dimension === 'ratio' ? undefined : tolerance.absolute?.[dimension];
+  const allowed = absolute ?? tolerance.relative * Math.abs(recomputed);
+  return Math.abs(claimed - recomputed) <= allowed + 1e-12 * Math.max(1, Math.abs(recomputed));
+}
