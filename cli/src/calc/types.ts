@@ -3,13 +3,7 @@
  * every length a number in the file's unit system, bolt sizes as diameters, hole dimensions resolved.
  * The on-disk shape is defined by schema/calc.schema.json (format `ligament-calc`).
  */
-import type {
-  CodeProfile,
-  LoadDirection,
-  MemberInput,
-  Finding,
-  MemberResult,
-} from '../engine/types.js';
+import type { CodeProfile, LoadDirection, MemberInput, Finding, MemberResult } from '../engine/types.js';
 
 export interface CalcMeta {
   readonly project: string;
