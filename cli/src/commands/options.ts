@@ -1,0 +1,52 @@
+/**
+ * Parsers for option values, used by commander (so a bad value is a usage error, exit 2) and by
+ * the actions to build typed settings.
+ */
+import { InvalidArgumentError, Option } from 'commander';
+import type { LoadDirection } from '../engine/types.js';
+import { collectTolerance, ToleranceError } from '../runner/tolerance.js';
+import type { ToleranceSpec } from '../runner/types.js';
+
+export const FORMATS = ['text', 'json', 'junit', 'sarif', 'markdown'] as const;
+export type Format = (typeof FORMATS)[number];
+
+export function parsePositiveInt(max: number) {
+  return (value: string): number => {
+    if (!/^\d+$/.test(value.trim()))
+      throw new InvalidArgumentError(`expected a whole number from 1 to ${max}`);
+    const n = Number(value);
+    if (n < 1 || n > max) throw new InvalidArgumentError(`expected a whole number from 1 to ${max}`);
+    return n;
+  };
+}
+
+export function toleranceArg(value: string, previous: ToleranceSpec | undefined): ToleranceSpec {
+  try {
+    return collectTolerance(value, previous);
+  } catch (err) {
+    if (err instanceof ToleranceError) throw new InvalidArgumentError(err.message);
+    throw err;
+  }
+}
+
+/** `--direction -x|+x|both`, repeatable. */
+export function directionArg(value: string, previous: LoadDirection[] | undefined): LoadDirection[] {
+  const list = previous ?? [];
+  const v = value.trim();
+  const wanted: LoadDirection[] = v === 'both' ? ['-x', '+x'] : v === '-x' || v === '+x' ? [v] : [];
+  if (wanted.length > 0) return [...list, ...wanted.filter((d) => !list.includes(d))];
+  throw new InvalidArgumentError('expected -x, +x or both');
+}
+
+export function directionOption(): Option {
+  return new Option(
+    '--direction <dir>',
+    'only this load direction: -x (pulled at the −x end), +x, or both (repeatable)',
+  ).argParser(directionArg);
+}
+
+export function colorOption(): Option {
+  return new Option('--color <when>', 'colour the text output')
+    .choices(['auto', 'always', 'never'])
+    .default('auto');
+}

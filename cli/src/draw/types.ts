@@ -1,0 +1,180 @@
+/**
+ * The drawing model: plain data a renderer turns into marks. Coordinates are in paper millimetres
+ * with the origin at the sheet's top-left corner and y pointing down (as in SVG and the DOM); the
+ * member itself is drawn to a stated scale (1:n), with its x axis to the right and y up the sheet.
+ *
+ * Shapes come in drawing order (back to front). Each names a {@link StrokeName}; {@link STROKES}
+ * says how each looks, so the SVG serialiser and the web's React renderer draw the same sketch.
+ */
+import type { LoadDirection, UnitSystem } from '../engine/types.js';
+
+/** A point on the sheet, paper mm. */
+export type Point = readonly [x: number, y: number];
+
+export interface Segment {
+  readonly from: Point;
+  readonly to: Point;
+}
+
+/** Line styles of the sketch. */
+export type StrokeName =
+  | 'frame'
+  | 'outline'
+  | 'hole'
+  | 'centre'
+  | 'extension'
+  | 'dimension'
+  | 'tick'
+  | 'load'
+  | 'fracture-minus'
+  | 'fracture-plus'
+  | 'leader';
+
+export interface StrokeStyle {
+  /** Line width, paper mm. */
+  readonly width: number;
+  readonly colour: string;
+  /** Dash pattern in paper mm, none for continuous. */
+  readonly dash?: readonly number[];
+}
+
+/** How each stroke looks: heavy outline, thin dimensions, dash-dot centre lines, dashed fracture lines. */
+export const STROKES: Readonly<Record<StrokeName, StrokeStyle>> = {
+  frame: { width: 0.35, colour: '#222222' },
+  outline: { width: 0.6, colour: '#1a1a1a' },
+  hole: { width: 0.45, colour: '#1a1a1a' },
+  centre: { width: 0.18, colour: '#555555', dash: [4, 1, 0.6, 1] },
+  extension: { width: 0.18, colour: '#444444' },
+  dimension: { width: 0.18, colour: '#444444' },
+  tick: { width: 0.35, colour: '#222222' },
+  load: { width: 0.45, colour: '#1a1a1a' },
+  'fracture-minus': { width: 0.5, colour: '#c0392b', dash: [2.4, 1.2] },
+  'fracture-plus': { width: 0.5, colour: '#1f5aa6', dash: [0.9, 1.1] },
+  leader: { width: 0.18, colour: '#444444' },
+};
+
+/** Text roles, for renderers that style them (size and weight are given on each text). */
+export type TextRole =
+  'hole-id' | 'dimension' | 'load' | 'fracture' | 'label' | 'title' | 'title-detail' | 'caution';
+
+export interface TextShape {
+  readonly kind: 'text';
+  readonly at: Point;
+  readonly text: string;
+  /** Cap height-ish font size, paper mm. */
+  readonly size: number;
+  readonly anchor: 'start' | 'middle' | 'end';
+  /** Rotation in degrees about `at`, counter-clockwise positive on the sheet (−90 reads bottom to top). */
+  readonly rotate?: number;
+  readonly weight?: 'normal' | 'bold';
+  readonly italic?: boolean;
+  readonly colour?: string;
+  readonly role: TextRole;
+}
+
+export interface LineShape {
+  readonly kind: 'line';
+  readonly from: Point;
+  readonly to: Point;
+  readonly stroke: StrokeName;
+}
+
+export interface PolylineShape {
+  readonly kind: 'polyline';
+  readonly points: readonly Point[];
+  readonly closed: boolean;
+  readonly stroke: StrokeName;
+}
+
+/** A round hole, drawn at its nominal diameter. */
+export interface CircleShape {
+  readonly kind: 'circle';
+  readonly holeId: string;
+  readonly centre: Point;
+  readonly radius: number;
+  readonly stroke: StrokeName;
+}
+
+/** A slotted hole: a stadium `along` long in sheet x and `across` tall in sheet y. */
+export interface SlotShape {
+  readonly kind: 'slot';
+  readonly holeId: string;
+  readonly centre: Point;
+  readonly along: number;
+  readonly across: number;
+  readonly stroke: StrokeName;
+}
+
+/** A dimension: extension lines, the dimension line, oblique ticks at its ends and its value. */
+export interface DimensionShape {
+  readonly kind: 'dimension';
+  /** gauge (across the load), pitch (along it) or overall width. */
+  readonly measure: 'gauge' | 'pitch' | 'width';
+  /** The real distance, in the member's units. */
+  readonly value: number;
+  readonly extensions: readonly Segment[];
+  readonly line: Segment;
+  readonly ticks: readonly Segment[];
+  readonly label: TextShape;
+}
+
+/** A load arrow: shaft from tail to head, a filled head at `head`. */
+export interface ArrowShape {
+  readonly kind: 'arrow';
+  /** The load direction for load arrows; axis arrows carry '+x' and the `dimension` stroke. */
+  readonly direction: LoadDirection;
+  readonly tail: Point;
+  readonly head: Point;
+  readonly headLength: number;
+  readonly headWidth: number;
+  readonly stroke: StrokeName;
+}
+
+/** The governing fracture line of a direction: edge → hole centres → far edge. */
+export interface FractureShape {
+  readonly kind: 'fracture';
+  readonly directions: readonly LoadDirection[];
+  readonly holes: readonly string[];
+  /** Net width of the chain, member units. */
+  readonly netWidth: number;
+  readonly points: readonly Point[];
+  readonly stroke: StrokeName;
+  readonly label: TextShape;
+  /** From the line's end at the edge to the label. */
+  readonly leader: Segment;
+}
+
+/** A plain rectangle (frame, title block cells), paper mm. */
+export interface RectShape {
+  readonly kind: 'rect';
+  readonly at: Point;
+  readonly width: number;
+  readonly height: number;
+  readonly stroke: StrokeName;
+}
+
+export type Shape =
+  | TextShape
+  | LineShape
+  | PolylineShape
+  | CircleShape
+  | SlotShape
+  | DimensionShape
+  | ArrowShape
+  | FractureShape
+  | RectShape;
+
+export interface Drawing {
+  /** Sheet size, paper mm. */
+  readonly width: number;
+  readonly height: number;
+  /** The member is drawn at 1:`scale` (paper mm per real mm is 1/scale). */
+  readonly scale: number;
+  /** Paper mm per member unit (in or mm). */
+  readonly paperPerUnit: number;
+  readonly units: UnitSystem;
+  readonly memberId: string;
+  /** One-line description for accessibility (SVG <title>, aria-label). */
+  readonly title: string;
+  readonly shapes: readonly Shape[];
+}
