@@ -1,0 +1,25 @@
+// Members made of connected flat elements: builders, unfolding, chains across junctions.
+export { analyseSection } from './analyseSection.js';
+export type { AnalyseSectionOptions } from './analyseSection.js';
+export { angle } from './angle.js';
+export type { AngleOptions } from './angle.js';
+export { centrelinePath } from './centrelinePath.js';
+export type { CentrelinePath, CentrelinePoint } from './centrelinePath.js';
+export { chainLegPairs } from './chainLegPairs.js';
+export { channel } from './channel.js';
+export { checkSection } from './checkSection.js';
+export { plateSection } from './plateSection.js';
+export { positiveLength } from './positiveLength.js';
+export { SectionError } from './sectionError.js';
+export type { SectionErrorCode } from './sectionError.js';
+export { sectionChain } from './sectionChain.js';
+export { sectionChains } from './sectionChains.js';
+export type { SectionChainsOptions } from './sectionChains.js';
+export { sectionGrossArea } from './sectionGrossArea.js';
+export { sectionRejection } from './sectionRejection.js';
+export { staggerOf } from './staggerOf.js';
+export { tee } from './tee.js';
+export { unfold } from './unfold.js';
+export type { UnfoldOptions } from './unfold.js';
+export { wShape } from './wShape.js';
+export type * from './types.js';
