@@ -1,0 +1,18 @@
+import type { Role } from './role.enum.js';
+
+/** Who is calling, as the guards establish it. */
+export interface AuthUser {
+  readonly id: number;
+  readonly email: string;
+  readonly name: string;
+  readonly role: Role;
+  readonly organisationId: number | null;
+  /** Set when the call is authenticated by a personal API token rather than a sign-in. */
+  readonly token?: { readonly id: number; readonly projectId: number };
+}
+
+/** JWT payload we sign. */
+export interface JwtPayload {
+  readonly sub: number;
+  readonly role: Role;
+}

@@ -1,0 +1,52 @@
+import { plainToInstance } from 'class-transformer';
+import {
+  IsBooleanString,
+  IsIn,
+  IsInt,
+  IsOptional,
+  IsString,
+  Max,
+  Min,
+  MinLength,
+  validateSync,
+} from 'class-validator';
+import { Type } from 'class-transformer';
+
+/** Every environment variable the service reads. All optional: the defaults run the demo. */
+export class EnvironmentVariables {
+  @IsOptional() @Type(() => Number) @IsInt() @Min(0) @Max(65535) PORT?: number;
+  @IsOptional() @IsString() HOST?: string;
+  @IsOptional() @IsString() LIGAMENT_DB?: string;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(0) LIGAMENT_DB_BUSY_TIMEOUT_MS?: number;
+  @IsOptional() @IsString() LIGAMENT_WEB_DIST?: string;
+  @IsOptional() @IsString() LIGAMENT_PUBLIC_URL?: string;
+  @IsOptional() @IsBooleanString() LIGAMENT_DEMO?: string;
+  @IsOptional() @IsString() @MinLength(16) JWT_SECRET?: string;
+  @IsOptional() @IsString() JWT_EXPIRES_IN?: string;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) INVITE_TTL_HOURS?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_FILE_BYTES?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_FILES?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_TOTAL_BYTES?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) THROTTLE_TTL_MS?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) THROTTLE_LIMIT?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) LOGIN_THROTTLE_TTL_MS?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) LOGIN_THROTTLE_LIMIT?: number;
+  @IsOptional() @IsString() SMTP_HOST?: string;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(0) @Max(65535) SMTP_PORT?: number;
+  @IsOptional() @IsString() MAIL_FROM?: string;
+  @IsOptional() @IsBooleanString() SMTP_FAKE?: string;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(0) @Max(65535) SMTP_FAKE_PORT?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(0) MAIL_RETRY_INTERVAL_MS?: number;
+  @IsOptional() @IsIn(['error', 'warn', 'log', 'debug']) LOG_LEVEL?: string;
+}
+
+/** ConfigModule `validate`: rejects a bad environment at start-up with every problem listed. */
+export function validateEnvironment(config: Record<string, unknown>): Record<string, unknown> {
+  const parsed = plainToInstance(EnvironmentVariables, config, { enableImplicitConversion: false });
+  const errors = validateSync(parsed, { skipMissingProperties: false, forbidUnknownValues: false });
+  if (errors.length > 0) {
+    const lines = errors.map((e) => `  ${e.property}: ${Object.values(e.constraints ?? {}).join('; ')}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  return config;
+}

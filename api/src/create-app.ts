@@ -1,0 +1,52 @@
+import 'reflect-metadata';
+import type { INestApplication, LogLevel } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
+import helmet from 'helmet';
+import { AppModule } from './app.module.js';
+import { HttpErrorFilter } from './common/http-error.filter.js';
+import { createValidationPipe } from './common/validation.js';
+import { CAUTION } from './reports/review-report.service.js';
+
+export interface CreateAppOptions {
+  readonly logger?: LogLevel[] | false;
+}
+
+export function buildOpenApi(app: INestApplication): OpenAPIObject {
+  const config = new DocumentBuilder()
+    .setTitle('Ligament audit service')
+    .setDescription(
+      'Submittal uploads, independent recompute of net sections, discrepancies, review stamps and mail. ' +
+        'Errors always have the shape { statusCode, error, message, details? }. ' +
+        CAUTION,
+    )
+    .setVersion('0.1.0')
+    .addBearerAuth({
+      type: 'http',
+      scheme: 'bearer',
+      description: 'A sign-in JWT from POST /api/auth/login, or a personal API token (lgt_…)',
+    })
+    .build();
+  return SwaggerModule.createDocument(app, config);
+}
+
+/**
+ * The configured application, initialised (migrations applied) but not listening. main.ts listens;
+ * tests and the OpenAPI script use it as it is.
+ */
+export async function createApp(options: CreateAppOptions = {}): Promise<NestExpressApplication> {
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, {
+    logger: options.logger ?? ['error', 'warn'],
+    abortOnError: false,
+  });
+  app.setGlobalPrefix('api');
+  app.use(helmet());
+  app.set('query parser', 'extended');
+  app.useGlobalPipes(createValidationPipe());
+  app.useGlobalFilters(new HttpErrorFilter());
+  app.enableShutdownHooks();
+  SwaggerModule.setup('api/docs', app, () => buildOpenApi(app), { jsonDocumentUrl: 'api/docs-json' });
+  await app.init();
+  return app;
+}

@@ -1,0 +1,28 @@
+import { Module } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { Transaction } from 'sequelize';
+import { databaseConfig } from '../config/index.js';
+import { DatabaseService } from './database.service.js';
+import { MODELS } from './models.js';
+
+@Module({
+  imports: [
+    SequelizeModule.forRootAsync({
+      inject: [databaseConfig.KEY],
+      useFactory: (config: ConfigType<typeof databaseConfig>) => ({
+        dialect: 'sqlite' as const,
+        storage: config.storage,
+        models: MODELS,
+        autoLoadModels: false,
+        synchronize: false,
+        logging: false,
+        // BEGIN IMMEDIATE: a writing transaction takes the write lock up front, so two never deadlock upgrading.
+        transactionType: Transaction.TYPES.IMMEDIATE,
+      }),
+    }),
+  ],
+  providers: [DatabaseService],
+  exports: [DatabaseService],
+})
+export class DatabaseModule {}

@@ -1,0 +1,4 @@
+import { initialSchema } from './0001-initial-schema.js';
+
+/** Every migration, in order. Add new ones at the end; never edit one that has shipped. */
+export const migrations = [initialSchema];

@@ -1,0 +1,32 @@
+import { CalcFile } from '../calc-files/models/calc-file.model.js';
+import { DiscrepancyComment } from '../discrepancies/models/discrepancy-comment.model.js';
+import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
+import { Event } from '../events/models/event.model.js';
+import { MailboxMessage } from '../mail/models/mailbox-message.model.js';
+import { OutboxMessage } from '../mail/models/outbox-message.model.js';
+import { Organisation } from '../organisations/models/organisation.model.js';
+import { ProjectMember } from '../projects/models/project-member.model.js';
+import { Project } from '../projects/models/project.model.js';
+import { MemberResult } from '../results/models/member-result.model.js';
+import { Submittal } from '../submittals/models/submittal.model.js';
+import { ApiToken } from '../tokens/models/api-token.model.js';
+import { Invitation } from '../users/models/invitation.model.js';
+import { User } from '../users/models/user.model.js';
+
+/** Every model; the tables themselves come from the migrations. */
+export const MODELS = [
+  Organisation,
+  User,
+  Invitation,
+  Project,
+  ProjectMember,
+  ApiToken,
+  Submittal,
+  CalcFile,
+  MemberResult,
+  Discrepancy,
+  DiscrepancyComment,
+  Event,
+  OutboxMessage,
+  MailboxMessage,
+];

@@ -1,0 +1,22 @@
+import { Module } from '@nestjs/common';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { EventsModule } from '../events/events.module.js';
+import { MailModule } from '../mail/mail.module.js';
+import { ProjectMember } from '../projects/models/project-member.model.js';
+import { Submittal } from '../submittals/models/submittal.model.js';
+import { DiscrepanciesController } from './discrepancies.controller.js';
+import { DiscrepanciesService } from './discrepancies.service.js';
+import { DiscrepancyComment } from './models/discrepancy-comment.model.js';
+import { Discrepancy } from './models/discrepancy.model.js';
+
+@Module({
+  imports: [
+    SequelizeModule.forFeature([Discrepancy, DiscrepancyComment, Submittal, ProjectMember]),
+    EventsModule,
+    MailModule,
+  ],
+  controllers: [DiscrepanciesController],
+  providers: [DiscrepanciesService],
+  exports: [DiscrepanciesService],
+})
+export class DiscrepanciesModule {}

@@ -1,0 +1,362 @@
+import {
+  BadRequestException,
+  ConflictException,
+  ForbiddenException,
+  Inject,
+  Injectable,
+  NotFoundException,
+  UnprocessableEntityException,
+} from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import { literal, Op, type Order, type Transaction, type WhereOptions } from 'sequelize';
+import type { Sequelize } from 'sequelize-typescript';
+import type { AuthUser } from '../auth/auth-user.js';
+import { Role } from '../auth/role.enum.js';
+import type { Page } from '../common/page.js';
+import { appConfig } from '../config/index.js';
+import { EventsService } from '../events/events.service.js';
+import { MailService } from '../mail/mail.service.js';
+import { ProjectMember } from '../projects/models/project-member.model.js';
+import { Submittal } from '../submittals/models/submittal.model.js';
+import { User } from '../users/models/user.model.js';
+import { OPEN_STATUSES, STATUS_MOVES, type DiscrepancyStatus } from './discrepancy-status.js';
+import type {
+  BulkResultDto,
+  BulkTransitionDto,
+  CommentViewDto,
+  CreateCommentDto,
+  DiscrepancyDetailDto,
+  DiscrepancyDto,
+  ListDiscrepanciesQuery,
+  TransitionDto,
+} from './dto/discrepancy.dto.js';
+import { DiscrepancyComment } from './models/discrepancy-comment.model.js';
+import { Discrepancy } from './models/discrepancy.model.js';
+
+const SEVERITY_RANK = literal("CASE severity WHEN 'error' THEN 0 WHEN 'warning' THEN 1 ELSE 2 END");
+
+/** Why a move is refused, or null when the actor may make it. */
+export function refusal(
+  d: { status: DiscrepancyStatus },
+  dto: { to: DiscrepancyStatus; note?: string; revisionSubmittalId?: number },
+  role: Role,
+): { status: 403 | 409 | 400; message: string } | null {
+  const moves = STATUS_MOVES.filter((m) => m.to === dto.to);
+  const mine = moves.find((m) => m.role === role);
+  if (!mine) {
+    const who = [...new Set(moves.map((m) => m.role))].join(' or ');
+    return { status: 403, message: `Only a ${who} may move a discrepancy to ${dto.to}.` };
+  }
+  if (!mine.from.includes(d.status)) {
+    return {
+      status: 409,
+      message: `A discrepancy that is ${d.status} cannot be moved to ${dto.to} (allowed from: ${mine.from.join(', ')}).`,
+    };
+  }
+  if (mine.requires === 'note-or-revision' && !dto.note && dto.revisionSubmittalId === undefined) {
+    return { status: 400, message: 'An answer needs a note or a revisionSubmittalId.' };
+  }
+  if (mine.requires === 'reason' && !dto.note) {
+    return { status: 400, message: `Moving to ${dto.to} needs a reason in "note".` };
+  }
+  return null;
+}
+
+function throwRefusal(r: { status: 403 | 409 | 400; message: string }): never {
+  if (r.status === 403) throw new ForbiddenException(r.message);
+  if (r.status === 409) throw new ConflictException(r.message);
+  throw new BadRequestException(r.message);
+}
+
+@Injectable()
+export class DiscrepanciesService {
+  constructor(
+    @InjectConnection() private readonly sequelize: Sequelize,
+    @InjectModel(Discrepancy) private readonly discrepancies: typeof Discrepancy,
+    @InjectModel(DiscrepancyComment) private readonly comments: typeof DiscrepancyComment,
+    @InjectModel(Submittal) private readonly submittals: typeof Submittal,
+    @InjectModel(ProjectMember) private readonly members: typeof ProjectMember,
+    @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
+    private readonly events: EventsService,
+    private readonly mail: MailService,
+  ) {}
+
+  async list(projectId: number, q: ListDiscrepanciesQuery): Promise<Page<DiscrepancyDto>> {
+    const where: WhereOptions<Discrepancy> = { projectId };
+    const w = where as Record<string, unknown>;
+    if (q.submittalId !== undefined) w.submittalId = q.submittalId;
+    if (q.class) w.class = { [Op.in]: q.class };
+    if (q.severity) w.severity = { [Op.in]: q.severity };
+    if (q.status) {
+      const statuses = q.status.flatMap((s) => (s === 'open' ? [...OPEN_STATUSES] : [s]));
+      w.status = { [Op.in]: [...new Set(statuses)] };
+    }
+    if (q.memberId) w.memberId = q.memberId;
+    if (q.code) w.code = q.code;
+    const direction = q.order === 'desc' ? 'DESC' : 'ASC';
+    const order: Order =
+      q.sort === 'severity'
+        ? [
+            [SEVERITY_RANK, direction],
+            ['id', 'ASC'],
+          ]
+        : [
+            [q.sort, direction],
+            ['id', 'ASC'],
+          ];
+    const [total, rows] = await Promise.all([
+      this.discrepancies.count({ where }),
+      this.discrepancies.findAll({
+        where,
+        order,
+        limit: q.pageSize,
+        offset: (q.page - 1) * q.pageSize,
+        raw: true,
+      }),
+    ]);
+    return { items: rows.map((d) => this.view(d)), total, page: q.page, pageSize: q.pageSize };
+  }
+
+  async detail(id: number, actor: AuthUser): Promise<DiscrepancyDetailDto> {
+    const d = await this.find(id);
+    const [submittal, history, comments] = await Promise.all([
+      this.submittals.findByPk(d.submittalId, {
+        include: [{ model: User, as: 'submittedBy', attributes: ['name'] }],
+      }),
+      this.events.list({ discrepancyId: id }, 1, 500),
+      this.comments.findAll({
+        where: { discrepancyId: id },
+        include: [{ model: User, attributes: ['name', 'role'] }],
+        order: [['id', 'ASC']],
+      }),
+    ]);
+    const allowedMoves = actor.token
+      ? []
+      : [
+          ...new Set(
+            STATUS_MOVES.filter((m) => refusal(d, { to: m.to, note: 'x' }, actor.role) === null).map(
+              (m) => m.to,
+            ),
+          ),
+        ];
+    return {
+      ...this.view(d),
+      raisedBy: submittal?.submittedBy?.name ?? '',
+      submittalTitle: submittal?.title ?? '',
+      history: history.items,
+      comments: comments.map((c) => this.commentView(c)),
+      allowedMoves,
+      canAcknowledge: !actor.token && actor.role === Role.OwnerRep && !d.acknowledgedAt,
+    };
+  }
+
+  /** One status move. 403 wrong role, 409 not from this status, 400 missing note, 422 bad revision link. */
+  async move(id: number, dto: TransitionDto, actor: AuthUser): Promise<DiscrepancyDetailDto> {
+    const d = await this.find(id);
+    const refused = refusal(d, dto, actor.role);
+    if (refused) throwRefusal(refused);
+    if (dto.revisionSubmittalId !== undefined) await this.checkRevision(d, dto.revisionSubmittalId);
+    await this.sequelize.transaction(async (transaction) => {
+      await this.apply(d, dto.to, dto.note, dto.revisionSubmittalId, actor, transaction);
+    });
+    return this.detail(id, actor);
+  }
+
+  /** Checker bulk move: all or nothing; any refusal answers with every refused id and changes none. */
+  async bulkMove(projectId: number, dto: BulkTransitionDto, actor: AuthUser): Promise<BulkResultDto> {
+    const ids = [...new Set(dto.ids)];
+    const rows = await this.discrepancies.findAll({ where: { id: { [Op.in]: ids } } });
+    const byId = new Map(rows.map((r) => [r.id, r]));
+    const problems: { id: number; status: number; message: string }[] = [];
+    for (const id of ids) {
+      const d = byId.get(id);
+      if (!d || d.projectId !== projectId) {
+        problems.push({ id, status: 404, message: `No discrepancy ${id} in project ${projectId}.` });
+        continue;
+      }
+      const r = refusal(d, dto, actor.role);
+      if (r) problems.push({ id, ...r });
+    }
+    if (problems.some((p) => p.status === 403))
+      throw new ForbiddenException({ message: 'Only a checker may make these moves.', details: problems });
+    if (problems.length > 0) {
+      throw new ConflictException({
+        message: `${problems.length} of ${ids.length} discrepancies cannot be moved to ${dto.to}; none were moved.`,
+        details: problems,
+      });
+    }
+    await this.sequelize.transaction(async (transaction) => {
+      for (const id of ids)
+        await this.apply(byId.get(id) as Discrepancy, dto.to, dto.note, undefined, actor, transaction, true);
+    });
+    const after = await this.discrepancies.findAll({
+      where: { id: { [Op.in]: ids } },
+      order: [['id', 'ASC']],
+      raw: true,
+    });
+    return { moved: ids.length, items: after.map((d) => this.view(d)) };
+  }
+
+  async comment(id: number, dto: CreateCommentDto, actor: AuthUser): Promise<CommentViewDto> {
+    const d = await this.find(id);
+    const created = await this.sequelize.transaction(async (transaction) => {
+      const c = await this.comments.create(
+        { discrepancyId: id, authorId: actor.id, body: dto.body },
+        { transaction },
+      );
+      await this.events.record(
+        {
+          type: 'discrepancy.commented',
+          actorId: actor.id,
+          projectId: d.projectId,
+          submittalId: d.submittalId,
+          discrepancyId: id,
+          data: { commentId: c.id },
+        },
+        transaction,
+      );
+      return c;
+    });
+    const c = await this.comments.findByPk(created.id, {
+      include: [{ model: User, attributes: ['name', 'role'] }],
+    });
+    return this.commentView(c as DiscrepancyComment);
+  }
+
+  /** The owner's rep's one action: note that they have seen it. Idempotent. */
+  async acknowledge(id: number, actor: AuthUser): Promise<DiscrepancyDetailDto> {
+    const d = await this.find(id);
+    if (!d.acknowledgedAt) {
+      await this.sequelize.transaction(async (transaction) => {
+        await d.update({ acknowledgedAt: new Date(), acknowledgedById: actor.id }, { transaction });
+        await this.events.record(
+          {
+            type: 'discrepancy.acknowledged',
+            actorId: actor.id,
+            projectId: d.projectId,
+            submittalId: d.submittalId,
+            discrepancyId: id,
+            data: {},
+          },
+          transaction,
+        );
+      });
+    }
+    return this.detail(id, actor);
+  }
+
+  private async apply(
+    d: Discrepancy,
+    to: DiscrepancyStatus,
+    note: string | undefined,
+    revisionSubmittalId: number | undefined,
+    actor: AuthUser,
+    transaction: Transaction,
+    bulk = false,
+  ): Promise<void> {
+    const from = d.status;
+    await d.update({ status: to }, { transaction });
+    await this.events.record(
+      {
+        type: `discrepancy.${to}`,
+        actorId: actor.id,
+        projectId: d.projectId,
+        submittalId: d.submittalId,
+        discrepancyId: d.id,
+        data: { from, to, note: note ?? null, revisionSubmittalId: revisionSubmittalId ?? null, bulk },
+      },
+      transaction,
+    );
+    if (to === 'answered') {
+      const checkers = await this.members.findAll({
+        where: { projectId: d.projectId },
+        include: [{ model: User, where: { role: Role.Checker, active: true }, attributes: ['email'] }],
+        transaction,
+      });
+      await this.mail.enqueue(
+        checkers.flatMap((m) =>
+          m.user
+            ? [
+                {
+                  kind: 'discrepancy-answered' as const,
+                  to: m.user.email,
+                  subject: `Discrepancy answered: ${d.code} on ${d.memberId ?? d.fileName}`,
+                  text: [
+                    `${actor.name} answered ${d.code} (${d.name}) on ${d.memberId ?? d.fileName}:`,
+                    note ?? '',
+                    revisionSubmittalId
+                      ? `Revision: ${this.app.publicUrl}/submittals/${revisionSubmittalId}`
+                      : '',
+                    `${this.app.publicUrl}/discrepancies/${d.id}`,
+                  ]
+                    .filter((line) => line !== '')
+                    .join('\n'),
+                },
+              ]
+            : [],
+        ),
+        transaction,
+      );
+    }
+  }
+
+  private async checkRevision(d: Discrepancy, revisionSubmittalId: number): Promise<void> {
+    const revision = await this.submittals.findByPk(revisionSubmittalId, {
+      attributes: ['id', 'projectId', 'revisionOfId'],
+    });
+    if (!revision || revision.projectId !== d.projectId || revision.revisionOfId !== d.submittalId) {
+      throw new UnprocessableEntityException({
+        message: `Submittal ${revisionSubmittalId} is not a revision of submittal ${d.submittalId}.`,
+        details: [
+          {
+            field: 'revisionSubmittalId',
+            rule: 'revision-of',
+            message: 'link a submittal uploaded with revisionOf = this discrepancy’s submittal',
+          },
+        ],
+      });
+    }
+  }
+
+  private async find(id: number): Promise<Discrepancy> {
+    const d = await this.discrepancies.findByPk(id);
+    if (!d) throw new NotFoundException(`No discrepancy ${id}.`);
+    return d;
+  }
+
+  private commentView(c: DiscrepancyComment): CommentViewDto {
+    return {
+      id: c.id,
+      body: c.body,
+      author: c.author?.name ?? '',
+      authorRole: c.author?.role ?? '',
+      at: new Date(c.createdAt).toISOString(),
+    };
+  }
+
+  view(d: Discrepancy): DiscrepancyDto {
+    return {
+      id: d.id,
+      projectId: d.projectId,
+      submittalId: d.submittalId,
+      calcFileId: d.calcFileId,
+      fileName: d.fileName,
+      memberId: d.memberId,
+      code: d.code,
+      name: d.name,
+      class: d.class,
+      severity: d.severity,
+      direction: d.direction,
+      chain: d.chain ? d.chain.split(',') : [],
+      claimed: d.claimed,
+      recomputed: d.recomputed,
+      message: d.message,
+      pointer: d.pointer,
+      status: d.status,
+      acknowledgedAt: d.acknowledgedAt ? new Date(d.acknowledgedAt).toISOString() : null,
+      createdAt: new Date(d.createdAt).toISOString(),
+      updatedAt: new Date(d.updatedAt).toISOString(),
+    };
+  }
+}

@@ -1,0 +1,35 @@
+import { Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import type { FindingClass, Severity } from 'ligament';
+import { CalcFile } from '../../calc-files/models/calc-file.model.js';
+import { Project } from '../../projects/models/project.model.js';
+import { Submittal } from '../../submittals/models/submittal.model.js';
+import { User } from '../../users/models/user.model.js';
+import type { DiscrepancyStatus } from '../discrepancy-status.js';
+
+@Table({ tableName: 'discrepancies' })
+export class Discrepancy extends Model {
+  @ForeignKey(() => Project) @Column({ type: DataType.INTEGER, allowNull: false }) declare projectId: number;
+  @ForeignKey(() => Submittal)
+  @Column({ type: DataType.INTEGER, allowNull: false })
+  declare submittalId: number;
+  @ForeignKey(() => CalcFile)
+  @Column({ type: DataType.INTEGER, allowNull: false })
+  declare calcFileId: number;
+  @Column({ type: DataType.STRING, allowNull: false }) declare fileName: string;
+  @Column({ type: DataType.STRING, allowNull: true }) declare memberId: string | null;
+  @Column({ type: DataType.STRING, allowNull: false }) declare code: string;
+  @Column({ type: DataType.STRING, allowNull: false }) declare name: string;
+  @Column({ type: DataType.STRING, allowNull: false }) declare class: FindingClass;
+  @Column({ type: DataType.STRING, allowNull: false }) declare severity: Severity;
+  @Column({ type: DataType.STRING, allowNull: true }) declare direction: string | null;
+  /** Hole ids of the chain (or of the holes concerned), comma-separated; null when none. */
+  @Column({ type: DataType.STRING, allowNull: true }) declare chain: string | null;
+  @Column({ type: DataType.FLOAT, allowNull: true }) declare claimed: number | null;
+  @Column({ type: DataType.FLOAT, allowNull: true }) declare recomputed: number | null;
+  @Column({ type: DataType.TEXT, allowNull: false }) declare message: string;
+  @Column({ type: DataType.STRING, allowNull: false }) declare pointer: string;
+  @Column({ type: DataType.STRING, allowNull: false }) declare status: DiscrepancyStatus;
+  @Column({ type: DataType.DATE, allowNull: true }) declare acknowledgedAt: Date | null;
+  @ForeignKey(() => User) @Column({ type: DataType.INTEGER, allowNull: true }) declare acknowledgedById:
+    number | null;
+}

@@ -1,0 +1,48 @@
+import { Logger } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
+import { appConfig, authConfig, DEMO_JWT_SECRET } from './config/index.js';
+import { createApp } from './create-app.js';
+import { SeedService } from './seed/seed.service.js';
+
+const logger = new Logger('Ligament');
+const app = await createApp();
+const config = app.get<ConfigType<typeof appConfig>>(appConfig.KEY);
+const auth = app.get<ConfigType<typeof authConfig>>(authConfig.KEY);
+
+if (auth.jwtSecret === DEMO_JWT_SECRET) {
+  logger.warn('!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!');
+  logger.warn(
+    'JWT_SECRET is not set: sign-ins are signed with the PUBLIC DEMO SECRET. Anyone can forge them.',
+  );
+  logger.warn('Set JWT_SECRET (16+ characters) before this service holds real data.');
+  logger.warn('!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!');
+}
+
+const seeded = config.demo ? await app.get(SeedService).seedIfEmpty() : null;
+await app.listen(config.port, config.host);
+
+const lines = [
+  '',
+  `Ligament is running at ${config.publicUrl}`,
+  `  API docs:  ${config.publicUrl}/api/docs`,
+  `  Health:    ${config.publicUrl}/api/health`,
+];
+if (config.demo) {
+  lines.push(
+    `  Mailbox:   ${config.publicUrl}/api/mail/mailbox (demo mode: mail caught by the local SMTP fake)`,
+  );
+  lines.push(
+    seeded
+      ? '  Demo data: seeded now (Harbour Lantern Footbridge).'
+      : '  Demo data: database already has data; not re-seeded.',
+  );
+  lines.push('  Demo sign-ins (every account uses the same demo password):');
+  for (const u of SeedService.DEMO_USERS)
+    lines.push(`    ${u.role.padEnd(11)} ${u.email.padEnd(42)} ${SeedService.DEMO_PASSWORD}`);
+}
+lines.push(
+  '',
+  'Ligament is a checking aid. The engineer of record decides; the governing code and local requirements apply.',
+  '',
+);
+process.stdout.write(`${lines.join('\n')}\n`);

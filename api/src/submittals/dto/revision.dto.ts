@@ -1,0 +1,75 @@
+import { ApiProperty } from '@nestjs/swagger';
+
+export class FileDiffDto {
+  @ApiProperty({ enum: ['changed', 'unchanged', 'added', 'removed'] }) change:
+    'changed' | 'unchanged' | 'added' | 'removed';
+  @ApiProperty({ nullable: true, type: String }) previousFile: string | null;
+  @ApiProperty({ nullable: true, type: String }) currentFile: string | null;
+  @ApiProperty({ enum: ['file-name', 'member-ids', 'none'], description: 'How the two files were paired' })
+  matchedBy: string;
+  @ApiProperty({
+    description:
+      'Unified diff (diff package) of the canonical JSON (sorted keys, 2 spaces); "" when unchanged',
+  })
+  patch: string;
+}
+
+export class DiffDiscrepancyDto {
+  @ApiProperty() id: number;
+  @ApiProperty() code: string;
+  @ApiProperty({ nullable: true, type: String }) memberId: string | null;
+  @ApiProperty({ nullable: true, type: String }) chain: string | null;
+  @ApiProperty() severity: string;
+  @ApiProperty() status: string;
+  @ApiProperty() message: string;
+}
+
+export class KeptDiscrepancyDto {
+  @ApiProperty({ type: DiffDiscrepancyDto }) previous: DiffDiscrepancyDto;
+  @ApiProperty({ type: DiffDiscrepancyDto }) current: DiffDiscrepancyDto;
+}
+
+export class RevisionDiffDto {
+  @ApiProperty() submittalId: number;
+  @ApiProperty() previousSubmittalId: number;
+  @ApiProperty({ type: [FileDiffDto] }) files: FileDiffDto[];
+  @ApiProperty({ type: [DiffDiscrepancyDto], description: 'In the previous submittal, gone from this one' })
+  closed: DiffDiscrepancyDto[];
+  @ApiProperty({ type: [KeptDiscrepancyDto], description: 'In both (same code, member and chain)' })
+  kept: KeptDiscrepancyDto[];
+  @ApiProperty({ type: [DiffDiscrepancyDto], description: 'New in this one' }) opened: DiffDiscrepancyDto[];
+}
+
+export class RecheckFindingDto {
+  @ApiProperty() fileName: string;
+  @ApiProperty() code: string;
+  @ApiProperty({ nullable: true, type: String }) memberId: string | null;
+  @ApiProperty({ nullable: true, type: String }) chain: string | null;
+  @ApiProperty() severity: string;
+  @ApiProperty() message: string;
+}
+
+export class RecheckValueChangeDto {
+  @ApiProperty() fileName: string;
+  @ApiProperty() memberId: string;
+  @ApiProperty({ example: 'An' }) field: string;
+  @ApiProperty({ nullable: true, type: Number }) stored: number | null;
+  @ApiProperty({ nullable: true, type: Number }) current: number | null;
+}
+
+export class RecheckDto {
+  @ApiProperty() submittalId: number;
+  @ApiProperty() storedEngineVersion: string;
+  @ApiProperty() currentEngineVersion: string;
+  @ApiProperty({ description: 'True when anything below differs' }) changed: boolean;
+  @ApiProperty({ type: [RecheckValueChangeDto] }) valueChanges: RecheckValueChangeDto[];
+  @ApiProperty({ type: [RecheckFindingDto] }) newFindings: RecheckFindingDto[];
+  @ApiProperty({ type: [RecheckFindingDto] }) goneFindings: RecheckFindingDto[];
+  @ApiProperty() unchangedFindings: number;
+  @ApiProperty({
+    type: 'array',
+    items: { type: 'object', additionalProperties: true },
+    description: 'CalcErrors if a stored file no longer loads',
+  })
+  loadErrors: unknown[];
+}

@@ -1,0 +1,128 @@
+import { ConflictException, Injectable } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { createTwoFilesPatch } from 'diff';
+import { CalcFile } from '../calc-files/models/calc-file.model.js';
+import { canonicalJson } from '../common/hash.js';
+import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
+import { findingKey } from '../results/result-rows.js';
+import type { DiffDiscrepancyDto, FileDiffDto, RevisionDiffDto } from './dto/revision.dto.js';
+import { SubmittalsService } from './submittals.service.js';
+
+/** The file's own JSON in canonical form (sorted keys, 2 spaces), so the diff shows content changes only. */
+export function canonicalFileText(file: Pick<CalcFile, 'content' | 'document'>): string {
+  try {
+    return `${canonicalJson(JSON.parse(file.content.toString('utf8')))}\n`;
+  } catch {
+    return `${canonicalJson(file.document)}\n`;
+  }
+}
+
+type Pairable = Pick<CalcFile, 'id' | 'fileName' | 'memberIds' | 'content' | 'document'>;
+
+/**
+ * Pairs each current file with its counterpart in the previous submittal: same file name first, then
+ * the previous file sharing the most member ids. Unpaired files are added / removed.
+ */
+export function pairFiles(previous: readonly Pairable[], current: readonly Pairable[]): FileDiffDto[] {
+  const left = new Set(previous);
+  const out: FileDiffDto[] = [];
+  const pending: Pairable[] = [];
+  for (const file of current) {
+    const same = previous.find((p) => left.has(p) && p.fileName === file.fileName);
+    if (same) {
+      left.delete(same);
+      out.push(diffPair(same, file, 'file-name'));
+    } else pending.push(file);
+  }
+  for (const file of pending) {
+    let best: Pairable | undefined;
+    let bestShared = 0;
+    for (const p of left) {
+      const shared = p.memberIds.filter((id) => file.memberIds.includes(id)).length;
+      if (shared > bestShared) [best, bestShared] = [p, shared];
+    }
+    if (best) {
+      left.delete(best);
+      out.push(diffPair(best, file, 'member-ids'));
+    } else {
+      out.push({
+        change: 'added',
+        previousFile: null,
+        currentFile: file.fileName,
+        matchedBy: 'none',
+        patch: createTwoFilesPatch('/dev/null', `b/${file.fileName}`, '', canonicalFileText(file)),
+      });
+    }
+  }
+  for (const p of left) {
+    out.push({
+      change: 'removed',
+      previousFile: p.fileName,
+      currentFile: null,
+      matchedBy: 'none',
+      patch: createTwoFilesPatch(`a/${p.fileName}`, '/dev/null', canonicalFileText(p), ''),
+    });
+  }
+  return out;
+}
+
+function diffPair(previous: Pairable, current: Pairable, matchedBy: 'file-name' | 'member-ids'): FileDiffDto {
+  const a = canonicalFileText(previous);
+  const b = canonicalFileText(current);
+  return {
+    change: a === b ? 'unchanged' : 'changed',
+    previousFile: previous.fileName,
+    currentFile: current.fileName,
+    matchedBy,
+    patch: a === b ? '' : createTwoFilesPatch(`a/${previous.fileName}`, `b/${current.fileName}`, a, b),
+  };
+}
+
+function brief(d: Discrepancy): DiffDiscrepancyDto {
+  return {
+    id: d.id,
+    code: d.code,
+    memberId: d.memberId,
+    chain: d.chain,
+    severity: d.severity,
+    status: d.status,
+    message: d.message,
+  };
+}
+
+@Injectable()
+export class RevisionsService {
+  constructor(
+    @InjectModel(CalcFile) private readonly calcFiles: typeof CalcFile,
+    @InjectModel(Discrepancy) private readonly discrepancies: typeof Discrepancy,
+    private readonly submittals: SubmittalsService,
+  ) {}
+
+  /** The revision against the submittal it revises: file diffs, and discrepancies closed, kept, opened. */
+  async diff(submittalId: number): Promise<RevisionDiffDto> {
+    const current = await this.submittals.find(submittalId);
+    if (current.revisionOfId === null)
+      throw new ConflictException(`Submittal ${submittalId} is not a revision of another submittal.`);
+    const previousId = current.revisionOfId;
+    const [prevFiles, curFiles, prevDisc, curDisc] = await Promise.all([
+      this.calcFiles.findAll({ where: { submittalId: previousId }, order: [['id', 'ASC']] }),
+      this.calcFiles.findAll({ where: { submittalId }, order: [['id', 'ASC']] }),
+      this.discrepancies.findAll({ where: { submittalId: previousId }, order: [['id', 'ASC']] }),
+      this.discrepancies.findAll({ where: { submittalId }, order: [['id', 'ASC']] }),
+    ]);
+    const currentByKey = new Map(curDisc.map((d) => [findingKey(d), d]));
+    const previousKeys = new Set(prevDisc.map((d) => findingKey(d)));
+    const kept = prevDisc.flatMap((d) => {
+      const match = currentByKey.get(findingKey(d));
+      return match ? [{ previous: brief(d), current: brief(match) }] : [];
+    });
+    return {
+      submittalId,
+      previousSubmittalId: previousId,
+      files: pairFiles(prevFiles, curFiles),
+      closed: prevDisc.filter((d) => !currentByKey.has(findingKey(d))).map(brief),
+      kept,
+      opened: curDisc.filter((d) => !previousKeys.has(findingKey(d))).map(brief),
+    };
+  }
+}

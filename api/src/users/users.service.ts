@@ -1,0 +1,64 @@
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import { Organisation } from '../organisations/models/organisation.model.js';
+import type { AuthUser } from '../auth/auth-user.js';
+import type { UpdateUserDto, UserDto } from './dto/user.dto.js';
+import { User } from './models/user.model.js';
+
+@Injectable()
+export class UsersService {
+  constructor(@InjectModel(User) private readonly users: typeof User) {}
+
+  /** The user, if it exists, is active and has a password (has accepted its invitation). */
+  async findActive(id: number): Promise<User | null> {
+    const user = await this.users.findByPk(id);
+    return user && user.active && user.passwordHash ? user : null;
+  }
+
+  findByEmail(email: string): Promise<User | null> {
+    return this.users.findOne({ where: { email: email.trim().toLowerCase() } });
+  }
+
+  toAuthUser(user: User): AuthUser {
+    return {
+      id: user.id,
+      email: user.email,
+      name: user.name,
+      role: user.role,
+      organisationId: user.organisationId,
+    };
+  }
+
+  async list(): Promise<UserDto[]> {
+    const rows = await this.users.findAll({ include: [Organisation], order: [['id', 'ASC']] });
+    return rows.map((u) => this.view(u));
+  }
+
+  async get(id: number): Promise<UserDto> {
+    const user = await this.users.findByPk(id, { include: [Organisation] });
+    if (!user) throw new NotFoundException(`No user ${id}.`);
+    return this.view(user);
+  }
+
+  async update(id: number, dto: UpdateUserDto, actor: AuthUser): Promise<UserDto> {
+    const user = await this.users.findByPk(id);
+    if (!user) throw new NotFoundException(`No user ${id}.`);
+    if (id === actor.id && (dto.active === false || (dto.role && dto.role !== user.role))) {
+      throw new ConflictException('Admins cannot deactivate themselves or change their own role.');
+    }
+    await user.update(dto);
+    return this.get(id);
+  }
+
+  view(u: User): UserDto {
+    return {
+      id: u.id,
+      email: u.email,
+      name: u.name,
+      role: u.role,
+      organisationId: u.organisationId,
+      organisation: u.organisation ? { id: u.organisation.id, name: u.organisation.name } : null,
+      active: u.active,
+    };
+  }
+}
