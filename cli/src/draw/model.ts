@@ -170,6 +170,7 @@ export function buildDrawing(member: MemberInput, result: MemberResult, options:
     for (const y of arrowYs) {
       shapes.push({
         kind: 'arrow',
+        purpose: 'load',
         direction,
         tail: [edge + sign * 3.5, Y(y)],
         head: [edge + sign * 16, Y(y)],
@@ -243,7 +244,7 @@ export function buildDrawing(member: MemberInput, result: MemberResult, options:
   const ax: Point = [left - 22, bottom + 10];
   shapes.push({
     kind: 'arrow',
-    direction: '+x',
+    purpose: 'axis-x',
     tail: ax,
     head: [ax[0] + 10, ax[1]],
     headLength: 1.8,
@@ -252,7 +253,7 @@ export function buildDrawing(member: MemberInput, result: MemberResult, options:
   });
   shapes.push({
     kind: 'arrow',
-    direction: '+x',
+    purpose: 'axis-y',
     tail: ax,
     head: [ax[0], ax[1] - 10],
     headLength: 1.8,

@@ -90,7 +90,11 @@ function shapeEl(s: Shape): string {
     case 'arrow': {
       const head = arrowHead(s.tail, s.head, s.headLength, s.headWidth);
       const st = STROKES[s.stroke];
-      return `<g data-load="${s.direction}">${line(s.tail, s.head, s.stroke)}<polygon points="${pts(head)}" fill="${st.colour}" stroke="none"/></g>`;
+      const data =
+        s.purpose === 'load'
+          ? `data-load="${s.direction ?? ''}"`
+          : `data-axis="${s.purpose === 'axis-x' ? 'x' : 'y'}"`;
+      return `<g ${data}>${line(s.tail, s.head, s.stroke)}<polygon points="${pts(head)}" fill="${st.colour}" stroke="none"/></g>`;
     }
     case 'fracture':
       return [

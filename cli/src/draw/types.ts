@@ -121,8 +121,10 @@ export interface DimensionShape {
 /** A load arrow: shaft from tail to head, a filled head at `head`. */
 export interface ArrowShape {
   readonly kind: 'arrow';
-  /** The load direction for load arrows; axis arrows carry '+x' and the `dimension` stroke. */
-  readonly direction: LoadDirection;
+  /** A load at a loaded end, or one of the small x/y axes beside the plate. */
+  readonly purpose: 'load' | 'axis-x' | 'axis-y';
+  /** For load arrows, the load direction they show. */
+  readonly direction?: LoadDirection;
   readonly tail: Point;
   readonly head: Point;
   readonly headLength: number;
