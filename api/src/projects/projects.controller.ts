@@ -60,6 +60,7 @@ export class ProjectsController {
   }
 
   @Get(':projectId/members')
+  @TokenAccess()
   @ProjectScope('project', 'projectId')
   @ApiOperation({ summary: 'Who is on the project' })
   @ApiOkResponse({ type: [ProjectMemberDto] })

@@ -3,6 +3,7 @@ import { ApiBearerAuth, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { ProjectScope } from '../auth/decorators/project-scope.decorator.js';
+import { TokenAccess } from '../auth/decorators/token-access.decorator.js';
 import { DashboardService } from './dashboard.service.js';
 import { DashboardDto, DashboardQuery } from './dto/dashboard.dto.js';
 import { ReviewReportService } from './review-report.service.js';
@@ -37,6 +38,7 @@ export class ReportsController {
   }
 
   @Get('submittals/:submittalId/report')
+  @TokenAccess()
   @ProjectScope('submittal', 'submittalId')
   @Header('Content-Type', 'text/html; charset=utf-8')
   @ApiProduces('text/html')

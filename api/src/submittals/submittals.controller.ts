@@ -150,6 +150,7 @@ export class SubmittalsController {
   }
 
   @Get('submittals/:submittalId/events')
+  @TokenAccess()
   @ProjectScope('submittal', 'submittalId')
   @ApiOperation({ summary: "The submittal's events, oldest first" })
   @ApiOkResponse({ type: EventPageDto })
