@@ -294,6 +294,43 @@ describe('loadCalcText: messages in plain words', () => {
     ]);
   });
 
+  it('treats a number too large for a double as not a number, and asks slotted holes for {width, length}', () => {
+    const huge = failed(
+      loadCalcText(variant(() => undefined).replace('"width": 14', '"width": 1e400'), 'a.json'),
+    );
+    expect(huge.map((e) => e.message)).toEqual([
+      '/members/0/width: must be a number or a string, not Infinity (rule type)',
+    ]);
+    const slot = failed(
+      loadCalcText(
+        variant(
+          (_, m) => (m['holes'] = [{ id: 'A1', x: 0, y: 2, type: 'long-slotted', slot: 'along', size: 0.8 }]),
+        ),
+        'a.json',
+      ),
+    );
+    expect(slot.map((e) => e.message)).toEqual([
+      '/members/0/holes/0/size: must be an object, not 0.8 (a slotted hole\'s size is { "width", "length" }) (rule type)',
+    ]);
+  });
+
+  it('accepts negative x and zero y, and reports a zero-y hole that reaches past the edge (LG301)', () => {
+    const neg = loaded(
+      loadCalcText(
+        variant((_, m) => (m['holes'] = [{ id: 'A1', x: '-3/4', y: 2, bolt: '3/4' }])),
+        'a.json',
+      ),
+    );
+    expect(neg.members[0]!.input.holes[0]!.x).toBe(-0.75);
+    const edge = failed(
+      loadCalcText(
+        variant((_, m) => (m['holes'] = [{ id: 'A1', x: 0, y: '0', bolt: '3/4' }])),
+        'a.json',
+      ),
+    );
+    expect(edge.map((e) => [e.pointer, e.rule])).toEqual([['/members/0/holes/0', 'hole-outside-member']]);
+  });
+
   it('reports duplicate member ids at the second id', () => {
     const errors = failed(
       loadCalcText(

@@ -72,6 +72,7 @@ function orList(items: readonly string[]): string {
 }
 
 function show(value: unknown): string {
+  if (typeof value === 'number' && !Number.isFinite(value)) return String(value);
   const s = JSON.stringify(value);
   if (s === undefined) return String(value);
   return s.length > 40 ? `${s.slice(0, 37)}...` : s;
@@ -113,7 +114,9 @@ function describe(e: ErrorObject): string {
   switch (e.keyword) {
     case 'type': {
       const types = Array.isArray(p['type']) ? (p['type'] as string[]) : [String(p['type'])];
-      return `must be ${orList(types.map((t) => TYPE_WORDS[t] ?? t))}, not ${show(e.data)}`;
+      const hint =
+        e.parentSchema === defs['slotSize'] ? ' (a slotted hole\'s size is { "width", "length" })' : '';
+      return `must be ${orList(types.map((t) => TYPE_WORDS[t] ?? t))}, not ${show(e.data)}${hint}`;
     }
     case 'exclusiveMinimum':
       return `must be greater than ${String(p['limit'])}`;
