@@ -262,6 +262,21 @@ describe('loadCalcText: messages in plain words', () => {
     expect(inchInMm.map((e) => [e.pointer, e.rule])).toEqual([['/members/0/holes/0/bolt', 'bolt-units']]);
   });
 
+  it('reports a string length in a mm file once, under mm-plain-number', () => {
+    const errors = failed(
+      loadCalcText(
+        variant((d, m) => {
+          d['units'] = 'mm';
+          m['width'] = '1/0';
+          m['thickness'] = 12;
+          m['holes'] = [{ id: 'A1', x: 0, y: 50, bolt: 'M20' }];
+        }),
+        'a.json',
+      ),
+    );
+    expect(errors.map((e) => [e.pointer, e.rule])).toEqual([['/members/0/width', 'mm-plain-number']]);
+  });
+
   it('reports a bolt the hole table does not know, and a slot shorter than it is wide', () => {
     const unknownBolt = failed(
       loadCalcText(

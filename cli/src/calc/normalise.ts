@@ -37,6 +37,7 @@ export function normaliseDocument(raw: Raw): { document: CalcDocument; issues: S
         rule: 'mm-plain-number',
         message: `${pointer}: ${JSON.stringify(value)} is a string; lengths in a "mm" file are plain numbers (rule mm-plain-number)`,
       });
+      return Number.NaN;
     }
     try {
       return parseLength(value, options);
