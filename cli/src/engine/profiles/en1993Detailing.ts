@@ -1,0 +1,61 @@
+import type { DetailingInput, DetailingIssue } from './types.js';
+
+const fmt = (v: number): string => String(Math.round(v * 10) / 10);
+
+/**
+ * EN 1993-1-8 Table 3.3 spacing and edge checks (REFERENCES, published): e1, e2 ≥ 1.2 d0; p1 ≥ 2.2 d0;
+ * p2 ≥ 2.4 d0; end and edge distances ≤ 4t + 40 mm; spacings ≤ min(14t, 200 mm) (the maxima need t,
+ * the thinner outer connected part). The table's relaxations (e.g. for staggered rows) are not applied.
+ *
+ * @param input - d0, t and whichever of e1, e2, p1, p2, eMax, pMax the layout has
+ * @returns the rules broken (empty when none)
+ * @example
+ * en1993Detailing({ d0: 22, e1: 25, p1: 50 }) // → [{ quantity: 'e1', kind: 'minimum', value: 25, limit: 26.4, … }]
+ */
+export function en1993Detailing(input: DetailingInput): DetailingIssue[] {
+  const issues: DetailingIssue[] = [];
+  const d0 = input.d0;
+  const min = (quantity: 'e1' | 'e2' | 'p1' | 'p2', value: number | undefined, factor: number) => {
+    if (value === undefined) return;
+    const limit = factor * d0;
+    if (value < limit - 1e-9) {
+      issues.push({
+        quantity,
+        kind: 'minimum',
+        value,
+        limit,
+        clause: 'EN 1993-1-8 Table 3.3',
+        message: `${quantity} = ${fmt(value)} mm is below ${factor} d0 = ${fmt(limit)} mm`,
+      });
+    }
+  };
+  min('e1', input.e1, 1.2);
+  min('e2', input.e2, 1.2);
+  min('p1', input.p1, 2.2);
+  min('p2', input.p2, 2.4);
+  if (input.t !== undefined) {
+    const eLimit = 4 * input.t + 40;
+    if (input.eMax !== undefined && input.eMax > eLimit + 1e-9) {
+      issues.push({
+        quantity: 'e',
+        kind: 'maximum',
+        value: input.eMax,
+        limit: eLimit,
+        clause: 'EN 1993-1-8 Table 3.3',
+        message: `end or edge distance ${fmt(input.eMax)} mm exceeds 4t + 40 = ${fmt(eLimit)} mm`,
+      });
+    }
+    const pLimit = Math.min(14 * input.t, 200);
+    if (input.pMax !== undefined && input.pMax > pLimit + 1e-9) {
+      issues.push({
+        quantity: 'p',
+        kind: 'maximum',
+        value: input.pMax,
+        limit: pLimit,
+        clause: 'EN 1993-1-8 Table 3.3',
+        message: `spacing ${fmt(input.pMax)} mm exceeds min(14t, 200) = ${fmt(pLimit)} mm`,
+      });
+    }
+  }
+  return issues;
+}

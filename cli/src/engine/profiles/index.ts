@@ -1,0 +1,24 @@
+// Code profiles outside AISC 360: EN 1993-1-1 (with EN 1993-1-8, EN 1090-2) and CSA S16-19, SI.
+export { csaS16Detailing } from './csaS16Detailing.js';
+export { csaS16EffectiveNetArea } from './csaS16EffectiveNetArea.js';
+export type { CsaS16ShearLagInput } from './csaS16EffectiveNetArea.js';
+export { csaS16HoleWidth } from './csaS16HoleWidth.js';
+export { CSA_S16_19, csaS16Profile } from './csaS16Profile.js';
+export { csaS16TensionResistance } from './csaS16TensionResistance.js';
+export type { CsaS16Factors } from './csaS16TensionResistance.js';
+export { en1993AngleOneLeg } from './en1993AngleOneLeg.js';
+export type { En1993AngleInput } from './en1993AngleOneLeg.js';
+export { en1993Detailing } from './en1993Detailing.js';
+export { en1993HoleDiameter } from './en1993HoleDiameter.js';
+export { en1993HoleWidth } from './en1993HoleWidth.js';
+export { en1993NetArea } from './en1993NetArea.js';
+export type { En1993Deduction } from './en1993NetArea.js';
+export { EN_1993_1_1, en1993Profile } from './en1993Profile.js';
+export { en1993TensionResistance } from './en1993TensionResistance.js';
+export type { En1993Factors } from './en1993TensionResistance.js';
+export { holeSpacings } from './holeSpacings.js';
+export type { HoleSpacings, SpacingHole } from './holeSpacings.js';
+export { ProfileError } from './profileError.js';
+export type * from './types.js';
+export { en1993SectionNetArea } from './en1993SectionNetArea.js';
+export type { En1993SectionNetArea } from './en1993SectionNetArea.js';

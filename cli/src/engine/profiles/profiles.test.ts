@@ -1,0 +1,169 @@
+import { describe, expect, it } from 'vitest';
+import { angle } from '../sections/angle.js';
+import { analyseSection } from '../sections/analyseSection.js';
+import { plateSection } from '../sections/plateSection.js';
+import { unfold } from '../sections/unfold.js';
+import { csaS16Detailing } from './csaS16Detailing.js';
+import { csaS16EffectiveNetArea } from './csaS16EffectiveNetArea.js';
+import { csaS16HoleWidth } from './csaS16HoleWidth.js';
+import { CSA_S16_19 } from './csaS16Profile.js';
+import { en1993AngleOneLeg } from './en1993AngleOneLeg.js';
+import { en1993Detailing } from './en1993Detailing.js';
+import { en1993HoleDiameter } from './en1993HoleDiameter.js';
+import { en1993NetArea } from './en1993NetArea.js';
+import { EN_1993_1_1, en1993Profile } from './en1993Profile.js';
+import { en1993SectionNetArea } from './en1993SectionNetArea.js';
+import { en1993TensionResistance } from './en1993TensionResistance.js';
+import { holeSpacings } from './holeSpacings.js';
+import { ProfileError } from './profileError.js';
+
+describe('EN 1993-1-1 profile', () => {
+  it('sizes d0 by EN 1090-2 normal clearance: 1 mm M12–M14, 2 mm M16–M24, 3 mm M27 and up (REFERENCES Tables)', () => {
+    expect([12, 14, 16, 20, 24, 27, 30, 36].map(en1993HoleDiameter)).toEqual([
+      13, 15, 18, 22, 26, 30, 33, 39,
+    ]);
+    expect(() => en1993HoleDiameter(10)).toThrow(ProfileError);
+    expect(EN_1993_1_1.holeWidth({ boltDiameter: 20 })).toMatchObject({
+      nominal: 22,
+      allowance: 0,
+      deducted: 22,
+    });
+  });
+
+  it('R7 Steel Buildings in Europe, Part 8, Worked Example 3: L120×80×12 with three M20 in one row, Anet = 2006 mm²', () => {
+    const d0 = EN_1993_1_1.holeWidth({ boltDiameter: 20 }).deducted;
+    // A = 2270 mm² (published); the row's gauge (50 mm in the 120 leg) and pitch (70 mm) are placed.
+    const holes = [0, 70, 140].map((x, i) => ({ id: `M${i}`, element: 'leg-a', x, gauge: 50, deducted: d0 }));
+    const lay = unfold(angle(120, 80, 12), holes, { tabulatedAg: 2270 });
+    const r = en1993SectionNetArea(lay, '-x');
+    expect(r.Anet).toBe(2006);
+    expect(r.straightDeduction).toBe(264);
+    expect(en1993NetArea(2270, 12, [{ holes: 22, stagger: 0 }]).Anet).toBe(2006);
+  });
+
+  it('takes the larger of the straight and the staggered deduction (6.2.2.2)', () => {
+    // Two holes d0 22 at p = 60 across, s = 40: staggered deduction t(2·22 − 40²/240) = 10·37.33 > one hole 220.
+    const r = en1993NetArea(3000, 10, [
+      { holes: 22, stagger: 0 },
+      { holes: 44, stagger: 1600 / 240 },
+    ]);
+    expect(r.governing).toBe(1);
+    expect(r.Anet).toBeCloseTo(3000 - 10 * (44 - 1600 / 240), 9);
+  });
+
+  it('Npl,Rd = A fy/γM0 and Nu,Rd = 0.9 Anet fu/γM2 with γM0 1.00, γM2 1.25 recommended and overridable', () => {
+    const r = en1993TensionResistance({ Ag: 3000, An: 2500, Fy: 355, Fu: 510 });
+    expect(r.yielding.available).toBeCloseTo(1065, 9);
+    expect(r.rupture.available).toBeCloseTo(918, 9);
+    expect(r.governing.limitState).toBe('rupture');
+    expect(
+      en1993Profile({ gammaM2: 1.1 }).tensionResistance({ Ag: 3000, An: 2500, Fy: 355, Fu: 510 }).rupture
+        .available,
+    ).toBeCloseTo((0.9 * 2500 * 510) / 1.1 / 1000, 9);
+  });
+
+  it('angles connected by one leg (EN 1993-1-8 3.10.3; Table 3.8 β from memory): β by pitch interpolation, one-bolt formula with e2', () => {
+    expect(en1993AngleOneLeg({ bolts: 2, d0: 22, t: 10, fu: 430, Anet: 1000, p1: 55 }).beta).toBeCloseTo(
+      0.4,
+      12,
+    );
+    expect(en1993AngleOneLeg({ bolts: 3, d0: 22, t: 10, fu: 430, Anet: 1000, p1: 110 }).beta).toBeCloseTo(
+      0.7,
+      12,
+    );
+    expect(en1993AngleOneLeg({ bolts: 3, d0: 22, t: 10, fu: 430, Anet: 1000, p1: 82.5 }).beta).toBeCloseTo(
+      0.6,
+      12,
+    );
+    // 2.0 (e2 − 0.5 d0) t fu / γM2 = 2.0 (40 − 11)(10)(430)/1.25 = 199.52 kN
+    expect(en1993AngleOneLeg({ bolts: 1, d0: 22, t: 10, fu: 430, e2: 40 }).NuRd).toBeCloseTo(199.52, 9);
+    expect(() => en1993AngleOneLeg({ bolts: 2, d0: 22, t: 10, fu: 430 })).toThrow(/Anet and p1/);
+  });
+
+  it('EN 1993-1-8 Table 3.3 (published): e1, e2 ≥ 1.2 d0, p1 ≥ 2.2 d0, p2 ≥ 2.4 d0, e ≤ 4t + 40, p ≤ min(14t, 200)', () => {
+    const d0 = 22;
+    const limits = en1993Detailing({ d0, t: 10, e1: 26, e2: 26, p1: 48, p2: 52, eMax: 81, pMax: 141 }).map(
+      (i) => [i.quantity, i.kind, i.limit],
+    );
+    expect(limits).toEqual([
+      ['e1', 'minimum', expect.closeTo(26.4, 9)],
+      ['e2', 'minimum', expect.closeTo(26.4, 9)],
+      ['p1', 'minimum', expect.closeTo(48.4, 9)],
+      ['p2', 'minimum', expect.closeTo(52.8, 9)],
+      ['e', 'maximum', 80],
+      ['p', 'maximum', 140],
+    ]);
+    expect(
+      en1993Detailing({ d0, t: 20, e1: 26.4, e2: 26.4, p1: 48.4, p2: 52.8, eMax: 120, pMax: 200 }),
+    ).toEqual([]);
+    expect(en1993Detailing({ d0, t: 20, pMax: 201 })[0]?.limit).toBe(200);
+  });
+
+  it('measures spacings from a hole pattern for the rules', () => {
+    const s = holeSpacings(
+      [
+        { x: 40, y: 30 },
+        { x: 110, y: 30 },
+        { x: 40, y: 90 },
+      ],
+      120,
+      [0, 300],
+    );
+    expect(s).toEqual({ e1: 40, e2: 30, p1: 70, p2: 60, eMax: 40, pMax: 70 });
+    expect(en1993Detailing({ d0: 22, ...s })).toEqual([]);
+  });
+});
+
+describe('CSA S16-19 profile', () => {
+  it('R3 N. Holtz, Carleton CSA S16 notes, Example T10: main plate 300 × 25, 350W: Tr gross 2362 kN, net 1924 kN', () => {
+    const w = CSA_S16_19.holeWidth({ holeDiameter: 22 }).deducted; // 22 mm punched + 2 = 24 (published)
+    expect(w).toBe(24);
+    const holes = [75, 150, 225].map((y, i) => ({
+      id: `h${i}`,
+      element: 'plate',
+      x: 0,
+      gauge: y,
+      deducted: w,
+    }));
+    const r = analyseSection(plateSection(300, 25), holes);
+    expect(r.An).toBe(5700); // wn = 300 − 3·24 = 228 mm (published)
+    const tr = CSA_S16_19.tensionResistance({ Ag: 7500, An: r.An, Fy: 350, Fu: 450 });
+    expect(Math.abs(tr.yielding.available - 2362)).toBeLessThanOrEqual(0.5); // 2362.5, printed 2362
+    expect(Math.abs(tr.rupture.available - 1924)).toBeLessThanOrEqual(0.5);
+  });
+
+  it('R3 lap plates 220 × 14: wn 148 mm, An 2072 mm², Tr 1399 kN net and 1940 kN gross for both plates', () => {
+    const holes = [35, 110, 185].map((y, i) => ({
+      id: `h${i}`,
+      element: 'plate',
+      x: 0,
+      gauge: y,
+      deducted: 24,
+    }));
+    const r = analyseSection(plateSection(220, 14), holes);
+    expect(r.An).toBe(2072);
+    const tr = CSA_S16_19.tensionResistance({ Ag: 2 * 3080, An: 2 * r.An, Fy: 350, Fu: 450 });
+    expect(Math.abs(tr.rupture.available - 1399)).toBeLessThanOrEqual(0.5);
+    expect(Math.abs(tr.yielding.available - 1940)).toBeLessThanOrEqual(0.5);
+  });
+
+  it('angles: Ane = 0.80 An with 4 or more transverse lines, 0.60 with fewer (R3, published)', () => {
+    expect(csaS16EffectiveNetArea({ An: 1000, shape: 'angle', transverseLines: 4 }).Ane).toBeCloseTo(800, 9);
+    expect(csaS16EffectiveNetArea({ An: 1000, shape: 'angle', transverseLines: 3 }).Ane).toBeCloseTo(600, 9);
+    // W flanges with bf ≥ 2/3 d and 3+ lines: 0.90 (secondary source, see the function's notes).
+    expect(
+      csaS16EffectiveNetArea({ An: 1000, shape: 'w-flange', transverseLines: 3, bf: 200, d: 300 }).factor,
+    ).toBe(0.9);
+  });
+
+  it('pitch ≥ 2.7 d (R3, published); hole deducted = hole + 2 mm', () => {
+    expect(
+      csaS16Detailing({ d0: 22, boltDiameter: 20, p1: 53, p2: 54 }).map((i) => [i.quantity, i.limit]),
+    ).toEqual([['p1', 54]]);
+    expect(csaS16HoleWidth({ holeDiameter: 22 })).toMatchObject({
+      allowance: 2,
+      deducted: 24,
+      source: 'explicit',
+    });
+  });
+});
