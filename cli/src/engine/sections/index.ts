@@ -23,3 +23,5 @@ export { unfold } from './unfold.js';
 export type { UnfoldOptions } from './unfold.js';
 export { wShape } from './wShape.js';
 export type * from './types.js';
+export { unfoldedStrips } from './unfoldedStrips.js';
+export type { UnfoldedJunctionLine, UnfoldedStrip } from './unfoldedStrips.js';
