@@ -1,8 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { leastChains } from '../leastChains.js';
 import { analyseSection } from './analyseSection.js';
 import { angle } from './angle.js';
 import { plateSection } from './plateSection.js';
+import { sectionChains } from './sectionChains.js';
+import { unfold } from './unfold.js';
 import type { LoadDirection } from '../types.js';
 import type { SectionHoleInput } from './types.js';
 
@@ -84,6 +87,28 @@ describe('section search properties', () => {
         }));
         const result = analyseSection(plateSection(12, 0.5), input, { directions: [direction] });
         expect(result.An).toBeCloseTo(plateLeastNetArea(12, 0.5, 0.875, plate, direction), 9);
+      }),
+      { numRuns: 150 },
+    );
+  });
+
+  it('a one-element section gives the core plate search’s k least chains (leastChains, net width × t)', () => {
+    fc.assert(
+      fc.property(plateCase, ({ holes, direction }) => {
+        const placed = holes.map(([x, y], i) => ({
+          id: `h${i}`,
+          index: i,
+          x: x * 1.5,
+          y: y * 2,
+          deducted: 0.875,
+        }));
+        const core = leastChains({ width: 12, thickness: 0.5, holes: placed }, direction, 5);
+        const lay = unfold(
+          plateSection(12, 0.5),
+          placed.map((h) => ({ id: h.id, element: 'plate', x: h.x, gauge: h.y, deducted: h.deducted })),
+        );
+        const ours = sectionChains(lay, direction, { k: 5 });
+        expect(ours.map((c) => c.netArea)).toEqual(core.map((c) => expect.closeTo(c.netArea, 9)));
       }),
       { numRuns: 150 },
     );

@@ -1,3 +1,4 @@
+import { staggerTerm } from '../staggerTerm.js';
 import { SectionError } from './sectionError.js';
 import type { SectionLayout } from './types.js';
 
@@ -26,5 +27,5 @@ export function staggerOf(
     throw new SectionError('not-a-chain', `holes "${ha.id}" and "${hb.id}" lie on one gauge line`);
   }
   const s = Math.abs(ha.x - hb.x);
-  return { s, g, term: (s * s) / (4 * g) };
+  return { s, g, term: staggerTerm(s, g) };
 }
