@@ -10,3 +10,4 @@ export { blockShearEn } from './blockShearEn.js';
 export type { BlockShearEnInput } from './blockShearEn.js';
 export { BlockShearError } from './blockShearError.js';
 export type * from './types.js';
+export { sectionBlockLayouts } from './sectionBlockLayouts.js';
