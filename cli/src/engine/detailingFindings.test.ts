@@ -1,0 +1,108 @@
+import { describe, expect, it } from 'vitest';
+import { analyseMember } from './analyseMember.js';
+import { detailingFindings } from './detailingFindings.js';
+import type { CodeProfile, HoleInput, MemberInput } from './types.js';
+
+const IN: CodeProfile = { standard: 'AISC 360-22', method: 'LRFD', units: 'in' };
+const MM: CodeProfile = { standard: 'AISC 360-22', method: 'LRFD', units: 'mm' };
+const bolt = (id: string, x: number, y: number, d = 0.75): HoleInput => ({
+  id,
+  x,
+  y,
+  boltDiameter: d,
+  type: 'standard',
+});
+const plate = (width: number, holes: HoleInput[]): MemberInput => ({
+  id: 'P1',
+  kind: 'plate',
+  width,
+  thickness: 0.5,
+  material: { Fy: 36, Fu: 58 },
+  directions: ['-x'],
+  holes,
+});
+const run = (m: MemberInput, profile = IN) =>
+  detailingFindings(m, profile, analyseMember(m, profile), '/members/0');
+
+describe('detailingFindings', () => {
+  it('finds nothing in the D.9 layout (AISC Design Examples v13.0 D.9 geometry)', () => {
+    expect(run(plate(14, [bolt('A', 0, 2), bolt('B', 2.5, 5), bolt('C', 2.5, 9), bolt('D', 0, 12)]))).toEqual(
+      [],
+    );
+  });
+
+  it('flags holes closer than 2-2/3 d = 2.00 in for 3/4 in bolts (AISC 360 J3.3), not at exactly 2.00 in', () => {
+    const close = run(plate(10, [bolt('A', 0, 4), bolt('B', 1.75, 4)]));
+    expect(close).toEqual([
+      expect.objectContaining({
+        code: 'LG201',
+        class: 'detailing',
+        severity: 'warning',
+        holes: ['A', 'B'],
+        claimed: 1.75,
+        pointer: '/members/0/holes/1',
+      }),
+    ]);
+    expect(close[0]!.recomputed).toBeCloseTo(2, 12);
+    expect(run(plate(10, [bolt('A', 0, 4), bolt('B', 2, 4)]))).toEqual([]);
+  });
+
+  it('flags edge distance across the load below Table J3.4: 3/4 in bolt needs 1 in (published, AISC 360-16)', () => {
+    const found = run(plate(10, [bolt('A', 0, 0.9), bolt('B', 0, 9)]));
+    expect(found).toEqual([
+      expect.objectContaining({
+        code: 'LG202',
+        holes: ['A'],
+        claimed: 0.9,
+        recomputed: 1,
+        pointer: '/members/0/holes/0/y',
+      }),
+    ]);
+  });
+
+  it('flags edge distance in mm below Table J3.4M: M20 needs 26 mm (published)', () => {
+    const m: MemberInput = { ...plate(200, [bolt('A', 0, 25, 20), bolt('B', 0, 100, 20)]), thickness: 12 };
+    expect(run(m, MM).map((f) => [f.code, f.holes])).toEqual([['LG202', ['A']]]);
+  });
+
+  it('flags a governing fracture line passing within a hole’s radius (deducted width / 2) of a hole it does not deduct (LG203)', () => {
+    // A straight row A, E, C at x = 0, and beside E on its gauge line a long slot across the load
+    // (3/4 in bolt: 1-7/8 + 1/16 = 1.9375 in deducted, radius 0.96875) 0.85 in further along. No chain
+    // through B can form from -x (E lies on its loaded side), so A–E–C governs and passes 0.85 from B.
+    const slot: HoleInput = {
+      id: 'B',
+      x: 0.85,
+      y: 5,
+      boltDiameter: 0.75,
+      type: 'long-slotted',
+      slot: 'across',
+    };
+    const m = plate(10, [bolt('A', 0, 2), bolt('E', 0, 5), slot, bolt('C', 0, 8)]);
+    const r = analyseMember(m, IN);
+    expect(r.directions[0]!.governing!.holes).toEqual(['A', 'E', 'C']);
+    const found = detailingFindings(m, IN, r, '/members/0').filter((f) => f.code === 'LG203');
+    expect(found).toEqual([
+      expect.objectContaining({
+        holes: ['B'],
+        chain: ['A', 'E', 'C'],
+        direction: '-x',
+        pointer: '/members/0/holes/2',
+      }),
+    ]);
+    expect(found[0]!.claimed).toBeCloseTo(0.85, 12);
+    expect(found[0]!.recomputed).toBeCloseTo(0.96875, 12);
+  });
+
+  it('does not flag a round hole the line passes at more than its radius', () => {
+    const m = plate(10, [bolt('A', 0, 2), bolt('E', 0, 5), bolt('B', 0.85, 5), bolt('C', 0, 8)]);
+    expect(run(m).filter((f) => f.code === 'LG203')).toEqual([]);
+  });
+
+  it('skips holes given only by dimension for spacing and edge distance', () => {
+    const m = plate(10, [
+      { id: 'A', x: 0, y: 0.5, type: 'standard', dimension: { across: 0.5, along: 0.5 } },
+      { id: 'B', x: 0.9, y: 0.5, type: 'standard', dimension: { across: 0.5, along: 0.5 } },
+    ]);
+    expect(run(m).filter((f) => f.code !== 'LG203')).toEqual([]);
+  });
+});
