@@ -37,7 +37,7 @@ function insertBounded(list: PartialPath[], path: PartialPath, k: number): void 
  * @throws EngineError when k is not a positive integer
  * @example
  * // AISC Design Examples v13.0 D.9, loaded from -x: the zigzag A–B–C–D governs
- * leastChains(d9, '-x', 2).map((c) => c.netWidth) // → [11.5417, 12.1220] (published 11.5, 12.1 in)
+ * leastChains(d9, '-x', 2).map((c) => c.netWidth) // → [11.5417, 12.1190] (published 11.5, 12.1 in)
  */
 export function leastChains(layout: HoleLayout, direction: LoadDirection | null, k = 10): Chain[] {
   if (!Number.isInteger(k) || k < 1) {

@@ -12,9 +12,9 @@ import type { HoleLayout, LoadDirection, RankedChain, ChainRejection } from './t
  * @param k - how many chains (default 10)
  * @returns up to k chains ascending by net width, with admissible directions and rejections
  * @example
- * // D.9: the zigzag forms both ways; the straight A–D only under -x (B blocks it under +x)
+ * // D.9: the zigzag forms both ways; A–B–C (11.9 in) only under +x (D blocks it under -x)
  * rankChains(d9, ['-x', '+x'], 3).map((c) => [c.holes.join('-'), c.admissible])
- * // → [['A-B-C-D', ['-x', '+x']], ['A-B-C', ['+x']], ['B-C-D', ['-x']]]
+ * // → [['A-B-C-D', ['-x', '+x']], ['A-B-C', ['+x']], ['B-C-D', ['+x']]]
  */
 export function rankChains(layout: HoleLayout, directions: readonly LoadDirection[], k = 10): RankedChain[] {
   return leastChains(layout, null, k).map((chain) => {
