@@ -1,3 +1,4 @@
+import { JsonColumn } from '../../database/json-column.js';
 import { Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import type { CalcDocument } from 'ligament';
 import { Submittal } from '../../submittals/models/submittal.model.js';
@@ -14,6 +15,6 @@ export class CalcFile extends Model {
   /** The original bytes, exactly as received. */
   @Column({ type: DataType.BLOB, allowNull: false }) declare content: Buffer;
   /** The normalised document the loader produced. */
-  @Column({ type: DataType.JSON, allowNull: false }) declare document: CalcDocument;
-  @Column({ type: DataType.JSON, allowNull: false }) declare memberIds: string[];
+  @JsonColumn() declare document: CalcDocument;
+  @JsonColumn() declare memberIds: string[];
 }

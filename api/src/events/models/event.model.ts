@@ -1,3 +1,4 @@
+import { JsonColumn } from '../../database/json-column.js';
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import { User } from '../../users/models/user.model.js';
 
@@ -10,5 +11,5 @@ export class Event extends Model {
   @Column({ type: DataType.INTEGER, allowNull: true }) declare discrepancyId: number | null;
   @ForeignKey(() => User) @Column({ type: DataType.INTEGER, allowNull: true }) declare actorId: number | null;
   @BelongsTo(() => User) declare actor?: User;
-  @Column({ type: DataType.JSON, allowNull: false }) declare data: Record<string, unknown>;
+  @JsonColumn() declare data: Record<string, unknown>;
 }

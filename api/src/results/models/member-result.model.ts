@@ -1,3 +1,4 @@
+import { JsonColumn } from '../../database/json-column.js';
 import { Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import type { CodeProfile, MemberResult as EngineMemberResult } from 'ligament';
 import { CalcFile } from '../../calc-files/models/calc-file.model.js';
@@ -21,7 +22,7 @@ export class MemberResult extends Model {
   declare calcFileId: number;
   @Column({ type: DataType.STRING, allowNull: false }) declare memberId: string;
   @Column({ type: DataType.STRING, allowNull: false }) declare engineVersion: string;
-  @Column({ type: DataType.JSON, allowNull: false }) declare profile: CodeProfile;
+  @JsonColumn() declare profile: CodeProfile;
   /** sha256 of the canonical member input: equal hashes mean the same inputs. */
   @Column({ type: DataType.STRING, allowNull: false }) declare inputsHash: string;
   @Column({ type: DataType.FLOAT, allowNull: false }) declare Ag: number;
@@ -32,6 +33,6 @@ export class MemberResult extends Model {
   @Column({ type: DataType.FLOAT, allowNull: false }) declare rupture: number;
   @Column({ type: DataType.FLOAT, allowNull: false }) declare available: number;
   @Column({ type: DataType.STRING, allowNull: false }) declare governingDirection: string;
-  @Column({ type: DataType.JSON, allowNull: false }) declare directions: StoredDirection[];
-  @Column({ type: DataType.JSON, allowNull: false }) declare result: EngineMemberResult;
+  @JsonColumn() declare directions: StoredDirection[];
+  @JsonColumn() declare result: EngineMemberResult;
 }

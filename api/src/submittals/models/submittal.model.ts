@@ -1,3 +1,4 @@
+import { JsonColumn } from '../../database/json-column.js';
 import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import { Project } from '../../projects/models/project.model.js';
 import { User } from '../../users/models/user.model.js';
@@ -22,7 +23,7 @@ export class Submittal extends Model {
   @BelongsTo(() => User, 'submittedById') declare submittedBy?: User;
   @Column({ type: DataType.INTEGER, allowNull: true }) declare viaTokenId: number | null;
   @Column({ type: DataType.STRING, allowNull: false }) declare engineVersion: string;
-  @Column({ type: DataType.JSON, allowNull: false }) declare summary: SubmittalSummary;
+  @JsonColumn() declare summary: SubmittalSummary;
   @Column({ type: DataType.STRING, allowNull: true }) declare stampAction: StampAction | null;
   @Column({ type: DataType.TEXT, allowNull: true }) declare stampComment: string | null;
   @Column({ type: DataType.TEXT, allowNull: true }) declare stampOverrideReason: string | null;
