@@ -1,0 +1,207 @@
+import {
+  Avatar,
+  Button,
+  makeStyles,
+  Menu,
+  MenuItem,
+  MenuList,
+  MenuPopover,
+  MenuTrigger,
+  shorthands,
+  Text,
+  tokens,
+  Tooltip,
+} from '@fluentui/react-components';
+import { SignOutRegular, WeatherMoonRegular, WeatherSunnyRegular } from '@fluentui/react-icons';
+import { Suspense } from 'react';
+import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { LogoMark } from '@/components/logo-mark';
+import { LoadingState } from '@/components/states';
+import { CAUTION } from '@/config/caution';
+import { paths } from '@/config/paths';
+import { signOut } from '@/lib/auth';
+import { useServerInfo } from '@/lib/server-info';
+import { useSession } from '@/lib/session';
+import { useThemeChoice } from '../theme/theme-choice';
+import { navItems, roleLabels } from './nav-items';
+
+const useStyles = makeStyles({
+  root: {
+    minHeight: '100vh',
+    display: 'flex',
+    flexDirection: 'column',
+    backgroundColor: tokens.colorNeutralBackground2,
+  },
+  skip: {
+    position: 'absolute',
+    left: '-10000px',
+    ':focus': {
+      left: tokens.spacingHorizontalM,
+      top: tokens.spacingVerticalS,
+      zIndex: 10,
+      backgroundColor: tokens.colorNeutralBackground1,
+      padding: tokens.spacingHorizontalS,
+    },
+  },
+  header: {
+    backgroundColor: tokens.colorBrandBackgroundStatic,
+    color: tokens.colorNeutralForegroundOnBrand,
+    display: 'flex',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    columnGap: tokens.spacingHorizontalXL,
+    rowGap: tokens.spacingVerticalXS,
+    padding: `${tokens.spacingVerticalS} ${tokens.spacingHorizontalXL}`,
+    '@media print': { display: 'none' },
+  },
+  brand: {
+    display: 'flex',
+    alignItems: 'center',
+    gap: tokens.spacingHorizontalS,
+    color: 'inherit',
+    textDecorationLine: 'none',
+    borderRadius: tokens.borderRadiusMedium,
+    ':focus-visible': { outline: `2px solid ${tokens.colorNeutralForegroundOnBrand}`, outlineOffset: '2px' },
+  },
+  wordmark: {
+    fontSize: tokens.fontSizeBase500,
+    fontWeight: tokens.fontWeightSemibold,
+    letterSpacing: '0.02em',
+  },
+  nav: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS, flexGrow: 1 },
+  navLink: {
+    color: tokens.colorNeutralForegroundOnBrand,
+    textDecorationLine: 'none',
+    padding: `${tokens.spacingVerticalXS} ${tokens.spacingHorizontalM}`,
+    borderRadius: tokens.borderRadiusMedium,
+    ...shorthands.borderBottom('3px', 'solid', 'transparent'),
+    ':hover': { backgroundColor: tokens.colorBrandBackgroundHover },
+    ':focus-visible': { outline: `2px solid ${tokens.colorNeutralForegroundOnBrand}`, outlineOffset: '1px' },
+  },
+  navLinkActive: {
+    fontWeight: tokens.fontWeightSemibold,
+    ...shorthands.borderBottom('3px', 'solid', tokens.colorPaletteMarigoldBorderActive),
+  },
+  tools: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
+  onBrandButton: {
+    color: tokens.colorNeutralForegroundOnBrand,
+    ':hover': { color: tokens.colorNeutralForeground1 },
+  },
+  user: { display: 'flex', flexDirection: 'column', lineHeight: tokens.lineHeightBase200, textAlign: 'left' },
+  main: {
+    flexGrow: 1,
+    width: '100%',
+    maxWidth: '1440px',
+    boxSizing: 'border-box',
+    margin: '0 auto',
+    padding: `${tokens.spacingVerticalXL} ${tokens.spacingHorizontalXL}`,
+    '@media (max-width: 900px)': { padding: `${tokens.spacingVerticalL} ${tokens.spacingHorizontalM}` },
+    ':focus': { outlineStyle: 'none' },
+  },
+  footer: {
+    borderTop: `${tokens.strokeWidthThin} solid ${tokens.colorNeutralStroke2}`,
+    backgroundColor: tokens.colorNeutralBackground1,
+    color: tokens.colorNeutralForeground2,
+    padding: `${tokens.spacingVerticalM} ${tokens.spacingHorizontalXL}`,
+    display: 'flex',
+    flexWrap: 'wrap',
+    justifyContent: 'space-between',
+    gap: tokens.spacingHorizontalL,
+  },
+});
+
+/** Header with the mark and the role's navigation, the page, and the footer carrying the caution. */
+export function AppShell() {
+  const styles = useStyles();
+  const session = useSession();
+  const navigate = useNavigate();
+  const serverInfo = useServerInfo();
+  const { choice, toggle } = useThemeChoice();
+  const role = session?.user.role;
+  const demo = serverInfo.data?.demo === true;
+  const items = navItems.filter((item) => role && item.roles.includes(role) && (!item.demoOnly || demo));
+
+  return (
+    <div className={styles.root}>
+      <a className={styles.skip} href="#main">
+        Skip to content
+      </a>
+      <header className={styles.header}>
+        <NavLink to={paths.home.getHref()} className={styles.brand} aria-label="Ligament home">
+          <LogoMark size={30} />
+          <span className={styles.wordmark}>Ligament</span>
+        </NavLink>
+        <nav aria-label="Main" className={styles.nav}>
+          {items.map((item) => (
+            <NavLink
+              key={item.href}
+              to={item.href}
+              className={({ isActive }) =>
+                isActive ? `${styles.navLink} ${styles.navLinkActive}` : styles.navLink
+              }
+            >
+              {item.label}
+            </NavLink>
+          ))}
+        </nav>
+        <div className={styles.tools}>
+          <Tooltip
+            content={choice === 'dark' ? 'Use the light theme' : 'Use the dark theme'}
+            relationship="label"
+          >
+            <Button
+              appearance="transparent"
+              className={styles.onBrandButton}
+              icon={choice === 'dark' ? <WeatherSunnyRegular /> : <WeatherMoonRegular />}
+              onClick={toggle}
+            />
+          </Tooltip>
+          {session && (
+            <Menu>
+              <MenuTrigger disableButtonEnhancement>
+                <Button
+                  appearance="transparent"
+                  className={styles.onBrandButton}
+                  aria-label={`Account menu for ${session.user.name}`}
+                >
+                  <Avatar name={session.user.name} size={28} color="neutral" />
+                  <span className={styles.user}>
+                    <Text size={200} weight="semibold">
+                      {session.user.name}
+                    </Text>
+                    <Text size={100}>{roleLabels[session.user.role]}</Text>
+                  </span>
+                </Button>
+              </MenuTrigger>
+              <MenuPopover>
+                <MenuList>
+                  <MenuItem onClick={() => navigate(paths.account.getHref())}>
+                    Account and API tokens
+                  </MenuItem>
+                  <MenuItem
+                    icon={<SignOutRegular />}
+                    onClick={() => {
+                      signOut();
+                      navigate(paths.signIn.getHref(), { replace: true });
+                    }}
+                  >
+                    Sign out
+                  </MenuItem>
+                </MenuList>
+              </MenuPopover>
+            </Menu>
+          )}
+        </div>
+      </header>
+      <main id="main" className={styles.main} tabIndex={-1}>
+        <Suspense fallback={<LoadingState />}>
+          <Outlet />
+        </Suspense>
+      </main>
+      <footer className={styles.footer}>
+        <Text size={200}>{CAUTION}</Text>
+        <Text size={200}>{serverInfo.data ? `Engine ${serverInfo.data.engineVersion}` : 'Ligament'}</Text>
+      </footer>
+    </div>
+  );
+}

@@ -1,0 +1,194 @@
+import {
+  Button,
+  createTableColumn,
+  DataGrid,
+  DataGridBody,
+  DataGridCell,
+  DataGridHeader,
+  DataGridHeaderCell,
+  DataGridRow,
+  makeStyles,
+  mergeClasses,
+  Text,
+  tokens,
+  type SortDirection,
+  type TableColumnDefinition,
+  type TableColumnId,
+} from '@fluentui/react-components';
+import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
+import type { Schema } from '@/lib/api-schemas';
+import { formatDate } from '@/lib/format';
+import type { DiscrepancyFilters } from '../api/get-discrepancies';
+import { StatusBadge } from './status-badge';
+
+type Row = Schema<'DiscrepancyDto'>;
+
+const useStyles = makeStyles({
+  wrap: { overflowX: 'auto' },
+  grid: { minWidth: '860px' },
+  code: { fontFamily: tokens.fontFamilyMonospace, fontWeight: tokens.fontWeightSemibold },
+  message: {
+    overflow: 'hidden',
+    textOverflow: 'ellipsis',
+    display: '-webkit-box',
+    WebkitLineClamp: '2',
+    WebkitBoxOrient: 'vertical',
+  },
+  active: { backgroundColor: tokens.colorBrandBackground2 },
+});
+
+const noCompare = () => 0;
+
+export interface DiscrepancyGridProps {
+  readonly items: readonly Row[];
+  readonly sort: DiscrepancyFilters['sort'];
+  readonly order: DiscrepancyFilters['order'];
+  readonly onSort: (sort: DiscrepancyFilters['sort'], order: DiscrepancyFilters['order']) => void;
+  readonly selectable: boolean;
+  readonly selected: ReadonlySet<number>;
+  readonly onSelect: (ids: Set<number>) => void;
+  readonly activeId: number | null;
+  readonly onOpen: (id: number) => void;
+}
+
+/**
+ * The discrepancy grid. Sorting is the server's: the grid only shows the arrow and asks for a new
+ * page; the rows arrive in order.
+ */
+export function DiscrepancyGrid({
+  items,
+  sort,
+  order,
+  onSort,
+  selectable,
+  selected,
+  onSelect,
+  activeId,
+  onOpen,
+}: DiscrepancyGridProps) {
+  const styles = useStyles();
+  const columns: TableColumnDefinition<Row>[] = [
+    createTableColumn<Row>({
+      columnId: 'code',
+      compare: noCompare,
+      renderHeaderCell: () => 'Code',
+      renderCell: (d) => (
+        <Button
+          appearance="transparent"
+          size="small"
+          className={styles.code}
+          onClick={(event) => {
+            event.stopPropagation();
+            onOpen(d.id);
+          }}
+          aria-label={`Open ${d.code} ${d.memberId ?? ''} details`}
+        >
+          {d.code}
+        </Button>
+      ),
+    }),
+    createTableColumn<Row>({
+      columnId: 'severity',
+      compare: noCompare,
+      renderHeaderCell: () => 'Severity',
+      renderCell: (d) => <SeverityBadge severity={d.severity} />,
+    }),
+    createTableColumn<Row>({
+      columnId: 'class',
+      compare: noCompare,
+      renderHeaderCell: () => 'Class',
+      renderCell: (d) => <ClassBadge findingClass={d.class} />,
+    }),
+    createTableColumn<Row>({
+      columnId: 'memberId',
+      compare: noCompare,
+      renderHeaderCell: () => 'Member',
+      renderCell: (d) => d.memberId ?? '—',
+    }),
+    createTableColumn<Row>({
+      columnId: 'fileName',
+      compare: noCompare,
+      renderHeaderCell: () => 'File',
+      renderCell: (d) => d.fileName,
+    }),
+    createTableColumn<Row>({
+      columnId: 'status',
+      compare: noCompare,
+      renderHeaderCell: () => 'Status',
+      renderCell: (d) => <StatusBadge status={d.status} />,
+    }),
+    createTableColumn<Row>({
+      columnId: 'message',
+      renderHeaderCell: () => 'Finding',
+      renderCell: (d) => (
+        <Text size={200} className={styles.message} title={d.message}>
+          {d.message}
+        </Text>
+      ),
+    }),
+    createTableColumn<Row>({
+      columnId: 'updatedAt',
+      compare: noCompare,
+      renderHeaderCell: () => 'Updated',
+      renderCell: (d) => formatDate(d.updatedAt),
+    }),
+  ];
+  const sortable = new Set(['code', 'severity', 'class', 'memberId', 'fileName', 'status', 'updatedAt']);
+
+  return (
+    <div className={styles.wrap}>
+      <DataGrid
+        className={styles.grid}
+        items={[...items]}
+        columns={columns}
+        getRowId={(d: Row) => d.id}
+        sortable
+        sortState={{
+          sortColumn: sort as TableColumnId,
+          sortDirection: (order === 'asc' ? 'ascending' : 'descending') as SortDirection,
+        }}
+        onSortChange={(_, state) => {
+          if (!sortable.has(String(state.sortColumn))) return;
+          onSort(
+            state.sortColumn as DiscrepancyFilters['sort'],
+            state.sortDirection === 'ascending' ? 'asc' : 'desc',
+          );
+        }}
+        selectionMode={selectable ? 'multiselect' : undefined}
+        selectedItems={selected}
+        onSelectionChange={(_, data) => onSelect(new Set([...data.selectedItems].map(Number)))}
+        resizableColumns={false}
+        aria-label="Discrepancies"
+        focusMode="composite"
+      >
+        <DataGridHeader>
+          <DataGridRow
+            selectionCell={
+              selectable
+                ? { checkboxIndicator: { 'aria-label': 'Select every row on this page' } }
+                : undefined
+            }
+          >
+            {({ renderHeaderCell }) => <DataGridHeaderCell>{renderHeaderCell()}</DataGridHeaderCell>}
+          </DataGridRow>
+        </DataGridHeader>
+        <DataGridBody<Row>>
+          {({ item, rowId }) => (
+            <DataGridRow<Row>
+              key={rowId}
+              className={mergeClasses(activeId === item.id && styles.active)}
+              selectionCell={
+                selectable
+                  ? { checkboxIndicator: { 'aria-label': `Select ${item.code} ${item.memberId ?? ''}` } }
+                  : undefined
+              }
+              data-testid="discrepancy-row"
+            >
+              {({ renderCell }) => <DataGridCell>{renderCell(item)}</DataGridCell>}
+            </DataGridRow>
+          )}
+        </DataGridBody>
+      </DataGrid>
+    </div>
+  );
+}

@@ -1,0 +1,246 @@
+import { Button, Dropdown, Field, makeStyles, Option, Text, tokens } from '@fluentui/react-components';
+import { ChevronLeftRegular, ChevronRightRegular, DocumentBulletListRegular } from '@fluentui/react-icons';
+import { useState } from 'react';
+import { useSearchParams } from 'react-router-dom';
+import { PageHeader } from '@/components/page-header';
+import { Section } from '@/components/section';
+import { EmptyState, ErrorState, LoadingState } from '@/components/states';
+import { useSession } from '@/lib/session';
+import { useDiscrepancies, type DiscrepancyFilters } from '../api/get-discrepancies';
+import { useDiscrepancyProjects } from '../api/get-discrepancy-projects';
+import { BulkMoveBar } from '../components/bulk-move-bar';
+import { DiscrepancyDetail } from '../components/discrepancy-detail';
+import { DiscrepancyFilters as FiltersBar, type FilterValues } from '../components/discrepancy-filters';
+import { DiscrepancyGrid } from '../components/discrepancy-grid';
+
+const useStyles = makeStyles({
+  layout: {
+    display: 'grid',
+    gridTemplateColumns: 'minmax(0, 1fr) minmax(340px, 420px)',
+    gap: tokens.spacingHorizontalL,
+    alignItems: 'start',
+    '@media (max-width: 1180px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
+  },
+  detail: { position: 'sticky', top: tokens.spacingVerticalL },
+  pager: {
+    display: 'flex',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: tokens.spacingHorizontalM,
+    flexWrap: 'wrap',
+    marginTop: tokens.spacingVerticalM,
+  },
+  pagerButtons: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
+  picker: { maxWidth: '420px', marginBottom: tokens.spacingVerticalL },
+});
+
+const SORTS: readonly DiscrepancyFilters['sort'][] = [
+  'id',
+  'createdAt',
+  'updatedAt',
+  'severity',
+  'class',
+  'status',
+  'memberId',
+  'code',
+  'fileName',
+];
+const list = (v: string | null) => (v ? v.split(',').filter(Boolean) : []);
+
+export function Component() {
+  const styles = useStyles();
+  const role = useSession()?.user.role;
+  const [params, setParams] = useSearchParams();
+  const projects = useDiscrepancyProjects();
+  const [selected, setSelected] = useState<Set<number>>(new Set());
+  const [activeId, setActiveId] = useState<number | null>(null);
+
+  const projectId = params.get('projectId') ? Number(params.get('projectId')) : projects.data?.[0]?.id;
+  const sortParam = params.get('sort') as DiscrepancyFilters['sort'] | null;
+  const filters: DiscrepancyFilters = {
+    submittalId: params.get('submittalId') ? Number(params.get('submittalId')) : undefined,
+    status: params.has('status') ? list(params.get('status')) : ['open'],
+    class: list(params.get('class')),
+    severity: list(params.get('severity')),
+    memberId: params.get('memberId') ?? '',
+    code: params.get('code') ?? '',
+    sort: sortParam && SORTS.includes(sortParam) ? sortParam : 'severity',
+    order: params.get('order') === 'desc' ? 'desc' : 'asc',
+    page: Math.max(1, Number(params.get('page') ?? 1) || 1),
+    pageSize: [25, 50, 100].includes(Number(params.get('pageSize'))) ? Number(params.get('pageSize')) : 25,
+  };
+  const discrepancies = useDiscrepancies(projectId, filters);
+
+  const update = (
+    next: Record<string, string | readonly string[] | number | undefined>,
+    resetPage = true,
+  ) => {
+    const p = new URLSearchParams(params);
+    if (projectId !== undefined) p.set('projectId', String(projectId));
+    for (const [key, value] of Object.entries(next)) {
+      const text = Array.isArray(value) ? value.join(',') : value === undefined ? '' : String(value);
+      if (text === '' && key !== 'status') p.delete(key);
+      else p.set(key, text);
+    }
+    if (resetPage) p.delete('page');
+    setParams(p, { replace: true });
+    setSelected(new Set());
+  };
+
+  const filterValues: FilterValues = {
+    status: filters.status ?? [],
+    class: filters.class ?? [],
+    severity: filters.severity ?? [],
+    memberId: filters.memberId ?? '',
+    code: filters.code ?? '',
+  };
+  const total = discrepancies.data?.total ?? 0;
+  const pages = Math.max(1, Math.ceil(total / filters.pageSize));
+  const project = projects.data?.find((p) => p.id === projectId);
+
+  if (projects.isPending) return <LoadingState label="Loading your projects…" />;
+  if (projects.isError) return <ErrorState error={projects.error} onRetry={() => void projects.refetch()} />;
+  if (projects.data.length === 0)
+    return (
+      <EmptyState title="No projects yet">Discrepancies appear once a project has submittals.</EmptyState>
+    );
+
+  return (
+    <>
+      <PageHeader
+        eyebrow={project?.name ?? 'Discrepancies'}
+        title="Discrepancies"
+        description={
+          filters.submittalId
+            ? `Raised by submittal #${filters.submittalId}. Clear the filter to see the whole project.`
+            : 'Every difference between what was claimed and what Ligament recomputed, with its status.'
+        }
+      />
+      <Field label="Project" className={styles.picker}>
+        <Dropdown
+          value={project?.name ?? ''}
+          selectedOptions={projectId ? [String(projectId)] : []}
+          onOptionSelect={(_, d) => {
+            setActiveId(null);
+            setSelected(new Set());
+            setParams(new URLSearchParams({ projectId: d.optionValue ?? '' }), { replace: true });
+          }}
+        >
+          {projects.data.map((p) => (
+            <Option key={p.id} value={String(p.id)}>
+              {p.name}
+            </Option>
+          ))}
+        </Dropdown>
+      </Field>
+      <div className={styles.layout}>
+        <Section>
+          <FiltersBar
+            values={filterValues}
+            onChange={(next) => update(next)}
+            onClear={() => {
+              setParams(new URLSearchParams(projectId ? { projectId: String(projectId), status: '' } : {}), {
+                replace: true,
+              });
+              setSelected(new Set());
+            }}
+          />
+          {filters.submittalId && (
+            <Button
+              size="small"
+              onClick={() => update({ submittalId: undefined })}
+              style={{ marginBottom: tokens.spacingVerticalS }}
+            >
+              Showing submittal #{filters.submittalId} only — show all
+            </Button>
+          )}
+          {role === 'checker' && selected.size > 0 && projectId !== undefined && (
+            <BulkMoveBar
+              projectId={projectId}
+              selectedIds={[...selected]}
+              onDone={() => setSelected(new Set())}
+            />
+          )}
+          {discrepancies.isPending ? (
+            <LoadingState label="Loading discrepancies…" />
+          ) : discrepancies.isError ? (
+            <ErrorState error={discrepancies.error} onRetry={() => void discrepancies.refetch()} />
+          ) : discrepancies.data.items.length === 0 ? (
+            <EmptyState title="Nothing matches these filters" icon={<DocumentBulletListRegular />}>
+              {filters.status?.includes('open')
+                ? 'No open discrepancies: every one has been accepted or waived, or none were raised.'
+                : 'Try other filters.'}
+            </EmptyState>
+          ) : (
+            <>
+              <DiscrepancyGrid
+                items={discrepancies.data.items}
+                sort={filters.sort}
+                order={filters.order}
+                onSort={(sort, order) => update({ sort, order })}
+                selectable={role === 'checker'}
+                selected={selected}
+                onSelect={setSelected}
+                activeId={activeId}
+                onOpen={setActiveId}
+              />
+              <nav className={styles.pager} aria-label="Pages">
+                <Text>
+                  {total} discrepanc{total === 1 ? 'y' : 'ies'} · page {filters.page} of {pages}
+                  {discrepancies.isFetching ? ' · updating…' : ''}
+                </Text>
+                <div className={styles.pagerButtons}>
+                  <Dropdown
+                    aria-label="Rows per page"
+                    value={`${filters.pageSize} per page`}
+                    selectedOptions={[String(filters.pageSize)]}
+                    onOptionSelect={(_, d) => update({ pageSize: d.optionValue })}
+                    style={{ minWidth: '140px' }}
+                  >
+                    {[25, 50, 100].map((n) => (
+                      <Option key={n} value={String(n)} text={`${n} per page`}>
+                        {`${n} per page`}
+                      </Option>
+                    ))}
+                  </Dropdown>
+                  <Button
+                    icon={<ChevronLeftRegular />}
+                    disabled={filters.page <= 1}
+                    onClick={() => update({ page: filters.page - 1 }, false)}
+                  >
+                    Previous
+                  </Button>
+                  <Button
+                    icon={<ChevronRightRegular />}
+                    iconPosition="after"
+                    disabled={filters.page >= pages}
+                    onClick={() => update({ page: filters.page + 1 }, false)}
+                  >
+                    Next
+                  </Button>
+                </div>
+              </nav>
+            </>
+          )}
+        </Section>
+        <div className={styles.detail}>
+          <Section>
+            {activeId !== null && projectId !== undefined ? (
+              <DiscrepancyDetail
+                key={activeId}
+                discrepancyId={activeId}
+                projectId={projectId}
+                onClose={() => setActiveId(null)}
+                canComment={role === 'checker' || role === 'consultant'}
+              />
+            ) : (
+              <EmptyState title="Choose a discrepancy">
+                Select its code in the grid to see its history, comments and the moves open to you.
+              </EmptyState>
+            )}
+          </Section>
+        </div>
+      </div>
+    </>
+  );
+}

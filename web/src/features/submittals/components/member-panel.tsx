@@ -1,0 +1,162 @@
+import { makeStyles, Subtitle2, Text, tokens } from '@fluentui/react-components';
+import type { CalcDocument, CalcMember } from 'ligament/calc';
+import { buildDrawing } from 'ligament/draw';
+import type { MemberResult } from 'ligament/engine';
+import { useMemo, useState } from 'react';
+import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
+import { EmptyState } from '@/components/states';
+import { CAUTION } from '@/config/caution';
+import type { Schema } from '@/lib/api-schemas';
+import { unitLabels } from '@/lib/units';
+import { ChainsTable } from './chains-table';
+import { ClaimsComparison } from './claims-comparison';
+import { MemberDrawing, type DrawnChain } from './member-drawing';
+
+const useStyles = makeStyles({
+  top: {
+    display: 'grid',
+    gridTemplateColumns: 'minmax(0, 3fr) minmax(0, 2fr)',
+    gap: tokens.spacingHorizontalL,
+    alignItems: 'start',
+    '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
+  },
+  block: {
+    display: 'flex',
+    flexDirection: 'column',
+    gap: tokens.spacingVerticalS,
+    minWidth: 0,
+    marginTop: tokens.spacingVerticalL,
+  },
+  tableWrap: { overflowX: 'auto' },
+  findings: {
+    listStyleType: 'none',
+    margin: 0,
+    padding: 0,
+    display: 'flex',
+    flexDirection: 'column',
+    gap: tokens.spacingVerticalS,
+  },
+  finding: {
+    padding: tokens.spacingHorizontalM,
+    borderRadius: tokens.borderRadiusMedium,
+    backgroundColor: tokens.colorNeutralBackground2,
+    display: 'flex',
+    flexDirection: 'column',
+    gap: tokens.spacingVerticalXS,
+  },
+  findingHead: { display: 'flex', gap: tokens.spacingHorizontalS, alignItems: 'center', flexWrap: 'wrap' },
+  code: { fontFamily: tokens.fontFamilyMonospace, fontWeight: tokens.fontWeightSemibold },
+  pointer: {
+    fontFamily: tokens.fontFamilyMonospace,
+    color: tokens.colorNeutralForeground3,
+    fontSize: tokens.fontSizeBase200,
+  },
+  legend: { color: tokens.colorNeutralForeground2 },
+});
+
+export interface MemberPanelProps {
+  readonly document: CalcDocument;
+  readonly member: CalcMember;
+  readonly result: MemberResult;
+  readonly findings: readonly Schema<'DiscrepancyDto'>[];
+}
+
+/** One member: its drawing, the least chains per direction, claimed against recomputed, and its findings. */
+export function MemberPanel({ document, member, result, findings }: MemberPanelProps) {
+  const styles = useStyles();
+  const [highlighted, setHighlighted] = useState<string | null>(null);
+  const units = document.profile.units;
+  const drawing = useMemo(
+    () =>
+      buildDrawing(member.input, result, {
+        units,
+        profile: document.profile,
+        project: document.meta.project,
+        caution: CAUTION,
+      }),
+    [member, result, units, document],
+  );
+  const chains: DrawnChain[] = result.directions.flatMap((d) =>
+    d.leastChains.map((c) => ({ direction: d.direction, holes: c.holes })),
+  );
+  const governingChain =
+    result.directions.find((d) => d.direction === result.governingDirection)?.governing?.holes ?? null;
+
+  return (
+    <div>
+      <div className={styles.top}>
+        <div className={styles.block}>
+          <Subtitle2 as="h3">Drawing, scale 1:{drawing.scale}</Subtitle2>
+          <MemberDrawing drawing={drawing} chains={chains} highlighted={highlighted} />
+          <Text size={200} className={styles.legend}>
+            Dashed lines are the governing fracture line for each load direction (labelled −x or +x with the
+            net width). Hover or focus a chain in the tables below to trace it on the plate. Dimensions in{' '}
+            {unitLabels[units].length}.
+          </Text>
+        </div>
+        <div className={styles.block}>
+          <Subtitle2 as="h3">Claimed against recomputed</Subtitle2>
+          <ClaimsComparison
+            claims={member.claims}
+            units={units}
+            recomputed={{
+              Ag: result.Ag,
+              An: result.An,
+              U: result.U,
+              Ae: result.Ae,
+              yielding: result.yielding.available,
+              rupture: result.rupture.available,
+              available: result.governing.available,
+              controllingChain: governingChain,
+            }}
+          />
+        </div>
+      </div>
+      {result.directions.map((d) => (
+        <div key={d.direction} className={styles.block}>
+          <Subtitle2 as="h3">
+            Load from {d.direction}: {d.leastChains.length} least chain{d.leastChains.length === 1 ? '' : 's'}
+          </Subtitle2>
+          {d.leastChains.length === 0 ? (
+            <Text>No chain can form under the full load from this direction.</Text>
+          ) : (
+            <div className={styles.tableWrap}>
+              <ChainsTable
+                direction={d.direction}
+                chains={d.leastChains}
+                governing={d.governing?.holes ?? null}
+                units={units}
+                highlighted={highlighted}
+                onHighlight={setHighlighted}
+              />
+            </div>
+          )}
+        </div>
+      ))}
+      <div className={styles.block}>
+        <Subtitle2 as="h3">Findings for {member.input.id}</Subtitle2>
+        {findings.length === 0 ? (
+          <EmptyState title="No findings">
+            Every claim for this member agrees with the recomputation.
+          </EmptyState>
+        ) : (
+          <ul className={styles.findings}>
+            {findings.map((f) => (
+              <li key={f.id} className={styles.finding}>
+                <div className={styles.findingHead}>
+                  <SeverityBadge severity={f.severity} />
+                  <span className={styles.code}>{f.code}</span>
+                  <Text>{f.name}</Text>
+                  <ClassBadge findingClass={f.class} />
+                  {f.direction && <Text size={200}>load from {f.direction}</Text>}
+                </div>
+                <Text>{f.message}</Text>
+                <span className={styles.pointer}>{f.pointer}</span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </div>
+    </div>
+  );
+}

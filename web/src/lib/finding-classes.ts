@@ -1,0 +1,46 @@
+import { tokens } from '@fluentui/react-components';
+import type { FindingClass, Severity } from 'ligament/engine';
+
+/** Finding classes in the order a checker reads them (the engine's own order). */
+export const FINDING_CLASSES: readonly FindingClass[] = [
+  'overstated',
+  'understated',
+  'missed-chain',
+  'phantom-chain',
+  'chain-width',
+  'equal-share',
+  'detailing',
+  'input',
+];
+
+export const findingClassLabels: Record<FindingClass, string> = {
+  overstated: 'Overstated',
+  understated: 'Understated',
+  'missed-chain': 'Missed chain',
+  'phantom-chain': 'Phantom chain',
+  'chain-width': 'Chain width',
+  'equal-share': 'Equal share',
+  detailing: 'Detailing',
+  input: 'Input',
+};
+
+/**
+ * Chart and badge colours per class, as theme tokens. Colour is never the only signal: every use
+ * also prints the class name.
+ */
+export const findingClassColours: Record<FindingClass, string> = {
+  overstated: tokens.colorPaletteRedBackground3,
+  understated: tokens.colorPaletteLightGreenBackground3,
+  'missed-chain': tokens.colorPaletteDarkOrangeBackground3,
+  'phantom-chain': tokens.colorPaletteGrapeBorderActive,
+  'chain-width': tokens.colorPaletteMarigoldBackground3,
+  'equal-share': tokens.colorPaletteBlueBorderActive,
+  detailing: tokens.colorPaletteSteelBorderActive,
+  input: tokens.colorNeutralForeground3,
+};
+
+export const severityLabels: Record<Severity, string> = { error: 'Error', warning: 'Warning', note: 'Note' };
+
+export function isFindingClass(value: string): value is FindingClass {
+  return (FINDING_CLASSES as readonly string[]).includes(value);
+}

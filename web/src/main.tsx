@@ -1,0 +1,14 @@
+import '@fontsource/lexend/400.css';
+import '@fontsource/lexend/600.css';
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { App } from './app/app';
+
+const container = document.getElementById('root');
+if (!container) throw new Error('index.html has no #root element');
+
+createRoot(container).render(
+  <StrictMode>
+    <App />
+  </StrictMode>,
+);
