@@ -2,6 +2,7 @@ import { buildChain } from './buildChain.js';
 import { directionSign, fractureResiduals } from './fractureResiduals.js';
 import { gaugeLines } from './gaugeLines.js';
 import { layoutTolerance } from './layoutTolerance.js';
+import { leastChains } from './leastChains.js';
 import type { HoleLayout, LoadDirection, ShareCheck } from './types.js';
 
 /** A path from the y = 0 edge to a hole: `loaded` fasteners passed on the loaded side so far. */
@@ -49,7 +50,9 @@ function lowerBound(sorted: Float64Array, value: number, length: number): number
  * compare with the full-load net area. The number of fasteners left on the loaded side is a sum over
  * the chain's legs, so the search is the DAG of {@link leastChains} with states (hole, fasteners on the
  * loaded side so far), keeping per hole only the Pareto-useful (count, width) states; a Fenwick tree
- * over slopes counts the loaded-side holes of each leg in O(log n). Assumes positive net widths.
+ * over slopes counts the loaded-side holes of each leg in O(log n). States that cannot beat the best
+ * chain found so far (starting from the least full-load chain) are dropped, bounding what remains by
+ * the least width still to come from each hole. Assumes positive net widths.
  *
  * @param layout - the holes and plate
  * @param direction - the load direction
@@ -95,64 +98,103 @@ export function shareCheck(layout: HoleLayout, direction: LoadDirection): ShareC
     }
   }
 
+  // Least width still to come from each hole to the far edge (all chains): a bound for pruning.
+  const rest = new Float64Array(n);
+  for (let r = n - 1; r >= 0; r -= 1) {
+    let least = 0;
+    for (let q = lineEnd[L[r]!]!; q < n; q += 1) {
+      const dx = X[q]! - X[r]!;
+      const dy = Y[q]! - Y[r]!;
+      const v = (dx * dx) / (4 * dy) - W[q]! + rest[q]!;
+      if (v < least) least = v;
+    }
+    rest[r] = least;
+  }
+  const t = layout.thickness;
+  const width = layout.width;
+  // The least full-load chain leaves no fastener on the loaded side: its net area is a first bound.
+  const start = leastChains(layout, direction, 1)[0] ?? null;
+  let bestValue = start ? start.netArea : Number.POSITIVE_INFINITY;
+  let bestState: ShareState | null = null;
+  const slack = (v: number): number => v + 1e-9 * Math.abs(v);
+  const bound = (cost: number, loaded: number): number => ((width + cost) * t * n) / (n - loaded);
+
   const fronts: ShareState[][] = Array.from({ length: n }, () => []);
+  const offer = (state: ShareState): void => {
+    if (bound(state.cost + rest[state.rank]!, state.loaded) > slack(bestValue)) return;
+    const done = state.loaded + lastCount[state.rank]!;
+    const value = bound(state.cost, done);
+    if (value < bestValue) {
+      bestValue = value;
+      bestState = state;
+    }
+    insertPareto(fronts[state.rank]!, state);
+  };
   for (let r = 0; r < n; r += 1) {
-    insertPareto(fronts[r]!, { rank: r, loaded: firstCount[r]! + nodeCount[r]!, cost: -W[r]!, prev: null });
+    offer({ rank: r, loaded: firstCount[r]! + nodeCount[r]!, cost: -W[r]!, prev: null });
   }
   const slopes = new Float64Array(n);
   const fenwick = new Int32Array(n + 1);
   for (let r = 0; r < n; r += 1) {
-    const from = fronts[r]!;
+    const from = fronts[r]!.filter((st) => bound(st.cost + rest[r]!, st.loaded) <= slack(bestValue));
+    if (from.length === 0) continue;
     const xr = X[r]!;
     const yr = Y[r]!;
     const beyond = lineEnd[L[r]!]!;
     const m = n - beyond;
     if (m === 0) continue;
     // A hole h passed by leg r → q lies on the loaded side when slope(r→q) > (X_h − X_r + eps)/(Y_h − Y_r).
-    for (let q = beyond; q < n; q += 1) slopes[q - beyond] = (X[q]! - xr + eps) / (Y[q]! - yr);
-    const sorted = slopes.slice(0, m).sort();
-    fenwick.fill(0, 0, m + 1);
+    // The slopes are sorted only once a leg from r survives the bound.
+    let sorted: Float64Array | null = null;
+    let inserted = beyond;
+    const insertUpTo = (limit: number): void => {
+      for (; inserted < limit; inserted += 1) {
+        for (let i = lowerBound(sorted!, slopes[inserted - beyond]!, m) + 1; i <= m; i += i & -i)
+          fenwick[i]! += 1;
+      }
+    };
+    const least = from[from.length - 1]!;
+    const fewest = from[0]!.loaded;
     for (let l = L[r]! + 1; l < lineEnd.length; l += 1) {
-      const start = lineStart(l);
+      const first = lineStart(l);
       const end = lineEnd[l]!;
-      for (let q = start; q < end; q += 1) {
+      for (let q = first; q < end; q += 1) {
         const dx = X[q]! - xr;
         const dy = Y[q]! - yr;
+        const add = (dx * dx) / (4 * dy) - W[q]!;
+        // States are ascending in loaded count and descending in cost: the last has the least cost.
+        if (bound(least.cost + add + rest[q]!, fewest) > slack(bestValue)) continue;
+        if (!sorted) {
+          for (let h = beyond; h < n; h += 1) slopes[h - beyond] = (X[h]! - xr + eps) / (Y[h]! - yr);
+          sorted = slopes.slice(0, m).sort();
+          fenwick.fill(0, 0, m + 1);
+        }
+        insertUpTo(first);
         let i = lowerBound(sorted, dx / dy, m);
         let passed = 0;
         for (; i > 0; i -= i & -i) passed += fenwick[i]!;
         const addLoaded = passed + nodeCount[q]!;
-        const add = (dx * dx) / (4 * dy) - W[q]!;
-        const to = fronts[q]!;
         for (const state of from) {
-          insertPareto(to, {
-            rank: q,
-            loaded: state.loaded + addLoaded,
-            cost: state.cost + add,
-            prev: state,
-          });
+          offer({ rank: q, loaded: state.loaded + addLoaded, cost: state.cost + add, prev: state });
         }
-      }
-      for (let q = start; q < end; q += 1) {
-        for (let i = lowerBound(sorted, slopes[q - beyond]!, m) + 1; i <= m; i += i & -i) fenwick[i]! += 1;
       }
     }
   }
 
-  let bestState: ShareState | null = null;
-  let bestValue = Number.POSITIVE_INFINITY;
-  for (let r = 0; r < n; r += 1) {
-    for (const state of fronts[r]!) {
-      const loaded = state.loaded + lastCount[r]!;
-      const value = ((layout.width + state.cost) * layout.thickness * n) / (n - loaded);
-      if (value < bestValue) {
-        bestValue = value;
-        bestState = state;
-      }
-    }
+  const found = bestState as ShareState | null;
+  if (!found && start) {
+    // No chain beats the least full-load chain.
+    return {
+      direction,
+      chain: start,
+      fastenersCarried: n,
+      fastenersTotal: n,
+      share: 1,
+      equivalentArea: start.netArea,
+    };
   }
   const positions: number[] = [];
-  for (let s = bestState; s; s = s.prev) positions.push(lines.order[s.rank]!);
+  for (let s: ShareState | null = found; s; s = s.prev) positions.push(lines.order[s.rank]!);
   positions.reverse();
   const chain = buildChain(layout, positions);
   // Recount from the fracture line itself, so the figures reported do not depend on the search.
