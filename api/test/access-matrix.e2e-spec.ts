@@ -4,9 +4,9 @@
  * the call through (any answer but 401/403); what the allowed call then does is tested elsewhere.
  */
 import request from 'supertest';
-import { Role } from '../src/auth/role.enum';
-import { InvitationsService } from '../src/users/invitations.service';
-import { bearer, bootApp, calcFile, EMAIL, login, type TestApp } from './helpers';
+import { Role } from '../src/auth/role.enum.js';
+import { InvitationsService } from '../src/users/invitations.service.js';
+import { bearer, bootApp, calcFile, EMAIL, login, type TestApp } from './helpers.js';
 
 type Actor =
   | 'anon'

@@ -1,6 +1,6 @@
 import { Sequelize } from 'sequelize-typescript';
 import request from 'supertest';
-import { bearer, bootApp, calcFile, EMAIL, login, type TestApp } from './helpers';
+import { bearer, bootApp, calcFile, EMAIL, login, type TestApp } from './helpers.js';
 
 let t: TestApp;
 const tok = { admin: '', consultant: '', checker: '', owner: '' };

@@ -40,8 +40,8 @@ export async function bootApp(env: Record<string, string> = {}): Promise<TestApp
     THROTTLE_LIMIT: '100000',
     ...env,
   });
-  const { createApp } = await import('../src/create-app');
-  const { SeedService } = await import('../src/seed/seed.service');
+  const { createApp } = await import('../src/create-app.js');
+  const { SeedService } = await import('../src/seed/seed.service.js');
   const app = await createApp({ logger: false });
   await app.get(SeedService).seedIfEmpty();
   return {

@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import { Sequelize } from 'sequelize-typescript';
 import request from 'supertest';
-import { bearer, bootApp, calcFile, EMAIL, login, type TestApp } from './helpers';
+import { bearer, bootApp, calcFile, EMAIL, login, type TestApp } from './helpers.js';
 
 let t: TestApp;
 let consultant: string;

@@ -1,4 +1,4 @@
-import { hashPassword, verifyPassword } from './password';
+import { hashPassword, verifyPassword } from './password.js';
 
 describe('password hashing', () => {
   it('verifies the password it hashed and refuses any other', async () => {

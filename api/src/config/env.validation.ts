@@ -37,6 +37,7 @@ export class EnvironmentVariables {
   @IsOptional() @IsBooleanString() SMTP_FAKE?: string;
   @IsOptional() @Type(() => Number) @IsInt() @Min(0) @Max(65535) SMTP_FAKE_PORT?: number;
   @IsOptional() @Type(() => Number) @IsInt() @Min(0) MAIL_RETRY_INTERVAL_MS?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(0) MAIL_RETRY_BASE_MS?: number;
   @IsOptional() @IsIn(['error', 'warn', 'log', 'debug']) LOG_LEVEL?: string;
 }
 

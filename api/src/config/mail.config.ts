@@ -13,5 +13,7 @@ export const mailConfig = registerAs('mail', () => {
     from: envString('MAIL_FROM', 'Ligament <no-reply@ligament.example.test>'),
     /** Outbox worker interval; 0 disables the worker (tests flush by hand). */
     retryIntervalMs: envInt('MAIL_RETRY_INTERVAL_MS', 3000),
+    /** First retry delay after a failed send; doubles per attempt, at most 10 minutes. */
+    retryBaseMs: envInt('MAIL_RETRY_BASE_MS', 5000),
   };
 });

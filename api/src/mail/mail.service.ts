@@ -30,9 +30,9 @@ export interface MailHealth {
   lastError: string | null;
 }
 
-/** Retry delay after the n-th failed attempt: 5 s doubling, at most 10 min. Never given up. */
-export function retryDelayMs(attempts: number): number {
-  return Math.min(5000 * 2 ** Math.max(0, attempts - 1), 10 * 60_000);
+/** Retry delay after the n-th failed attempt: `baseMs` doubling, at most 10 min. Never given up. */
+export function retryDelayMs(attempts: number, baseMs = 5000): number {
+  return Math.min(baseMs * 2 ** Math.max(0, attempts - 1), 10 * 60_000);
 }
 
 /**
@@ -166,7 +166,7 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
         await message.update({
           attempts,
           lastError: error instanceof Error ? error.message : String(error),
-          nextAttemptAt: new Date(Date.now() + retryDelayMs(attempts)),
+          nextAttemptAt: new Date(Date.now() + retryDelayMs(attempts, this.config.retryBaseMs)),
         });
         result.failed++;
       }

@@ -1,4 +1,4 @@
-import { parseMessage } from './parse-message';
+import { parseMessage } from './parse-message.js';
 
 describe('parseMessage', () => {
   it('reads headers, unfolds them and decodes quoted-printable bodies and encoded words', () => {
