@@ -40,7 +40,7 @@ function strength(limitState: LimitState, nominal: number, profile: CodeProfile)
  * @param profile - code edition, design method and unit system
  * @param options - k least chains per direction (default 10); directions (default the member's)
  * @returns the result
- * @throws EngineError when a hole's bolt size is not in the hole table
+ * @throws EngineError when a hole's bolt size is not in the hole table, or width or thickness is not positive
  * @example
  * // AISC Design Examples v13.0 D.9: 14 × 1/2 plate, A36, four 3/4 in bolts, loaded from -x
  * const r = analyseMember(d9Member, { standard: 'AISC 360-22', method: 'LRFD', units: 'in' });

@@ -13,6 +13,7 @@ export { staggerTerm } from './staggerTerm.js';
 export { netWidth } from './netWidth.js';
 export { memberLayout } from './memberLayout.js';
 export { layoutTolerance } from './layoutTolerance.js';
+export { checkLayout } from './checkLayout.js';
 export { gaugeLines, type GaugeLines } from './gaugeLines.js';
 export { chainDefect } from './chainDefect.js';
 export { chainOf } from './chainOf.js';

@@ -1,4 +1,5 @@
 import { buildChain } from './buildChain.js';
+import { checkLayout } from './checkLayout.js';
 import { EngineError } from './engineError.js';
 import { directionSign } from './fractureResiduals.js';
 import { gaugeLines } from './gaugeLines.js';
@@ -34,7 +35,7 @@ function insertBounded(list: PartialPath[], path: PartialPath, k: number): void 
  * @param direction - keep chains that can form under the full load from this direction; null: all
  * @param k - how many chains (default 10)
  * @returns up to k chains, ascending by net width, distinct; empty when the layout has no holes
- * @throws EngineError when k is not a positive integer
+ * @throws EngineError when k is not a positive integer or the layout has a bad value
  * @example
  * // AISC Design Examples v13.0 D.9, loaded from -x: the zigzag A–B–C–D governs
  * leastChains(d9, '-x', 2).map((c) => c.netWidth) // → [11.5417, 12.1190] (published 11.5, 12.1 in)
@@ -43,6 +44,7 @@ export function leastChains(layout: HoleLayout, direction: LoadDirection | null,
   if (!Number.isInteger(k) || k < 1) {
     throw new EngineError('invalid-argument', `leastChains: k must be a positive integer, got ${k}`);
   }
+  checkLayout(layout, 'leastChains');
   const n = layout.holes.length;
   if (n === 0) return [];
   const lines = gaugeLines(layout);

@@ -1,4 +1,5 @@
 import { buildChain } from './buildChain.js';
+import { checkLayout } from './checkLayout.js';
 import { directionSign, fractureResiduals } from './fractureResiduals.js';
 import { gaugeLines } from './gaugeLines.js';
 import { layoutTolerance } from './layoutTolerance.js';
@@ -57,6 +58,7 @@ function lowerBound(sorted: Float64Array, value: number, length: number): number
  * @param layout - the holes and plate
  * @param direction - the load direction
  * @returns the least netArea / share chain, or null when the layout has no holes
+ * @throws EngineError when the layout has a bad value (see checkLayout)
  * @example
  * // Plate 10 × 1, holes 1.0 wide: A (0, 3) and B (0, 7) side by side, C (3, 5) further along.
  * // From -x the straight A–B (wn 8) carries all three shares: 8 / 1 = 8.
@@ -65,6 +67,7 @@ function lowerBound(sorted: Float64Array, value: number, length: number): number
  * shareCheck(layout, '+x')?.equivalentArea // → 9   (chain C)
  */
 export function shareCheck(layout: HoleLayout, direction: LoadDirection): ShareCheck | null {
+  checkLayout(layout, 'shareCheck');
   const n = layout.holes.length;
   if (n === 0) return null;
   const lines = gaugeLines(layout);
