@@ -142,3 +142,30 @@ describe('ligament schema and --version', () => {
     }
   });
 });
+
+describe('program', () => {
+  it("lists each command in --help with the same words as the command's own description", async () => {
+    const { COMMANDS } = await import('../src/program.js');
+    const { createContext } = await import('../src/commands/context.js');
+    const ctx = createContext(
+      {
+        stdout: () => undefined,
+        stderr: () => undefined,
+        readStdin: async () => '',
+        cwd: '/',
+        env: {},
+        stdoutIsTTY: false,
+      },
+      '0.1.0',
+    );
+    for (const entry of COMMANDS) {
+      const command = (await entry.load())(ctx);
+      expect(command.name()).toBe(entry.name);
+      expect(command.description()).toBe(entry.summary);
+      const args = command.registeredArguments.map((a) =>
+        a.required ? `<${a.name()}${a.variadic ? '...' : ''}>` : `[${a.name()}]`,
+      );
+      expect(args.join(' ')).toBe(entry.args);
+    }
+  });
+});

@@ -1,4 +1,4 @@
-import { Command, Option } from 'commander';
+import { Command, Option } from './commander.js';
 import type { LoadDirection } from '../engine/types.js';
 import { EXIT_CODES_HELP, setExitCode, type CliContext } from './context.js';
 import { directionOption, parsePositiveInt } from './options.js';

@@ -1,4 +1,4 @@
-import { Command, Option } from 'commander';
+import { Command, Option } from './commander.js';
 import { DEFAULT_TOLERANCE } from '../runner/tolerance.js';
 import type { CheckSettings, FailOn, ToleranceSpec } from '../runner/types.js';
 import type { LoadDirection } from '../engine/types.js';

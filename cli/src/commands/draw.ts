@@ -1,4 +1,4 @@
-import { Command } from 'commander';
+import { Command } from './commander.js';
 import type { LoadDirection } from '../engine/types.js';
 import { EXIT_CODES_HELP, setExitCode, type CliContext } from './context.js';
 import { directionOption } from './options.js';

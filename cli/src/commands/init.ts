@@ -1,4 +1,4 @@
-import { Command, Option } from 'commander';
+import { Command, Option } from './commander.js';
 import { EXIT_CODES_HELP, setExitCode, UsageError, type CliContext } from './context.js';
 
 interface InitFlags {

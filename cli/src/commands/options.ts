@@ -2,7 +2,7 @@
  * Parsers for option values, used by commander (so a bad value is a usage error, exit 2) and by
  * the actions to build typed settings.
  */
-import { InvalidArgumentError, Option } from 'commander';
+import { InvalidArgumentError, Option } from './commander.js';
 import type { LoadDirection } from '../engine/types.js';
 import { collectTolerance, ToleranceError } from '../runner/tolerance.js';
 import type { ToleranceSpec } from '../runner/types.js';

@@ -1,4 +1,4 @@
-import { Command } from 'commander';
+import { Command } from './commander.js';
 import { EXIT_CODES_HELP, type CliContext } from './context.js';
 
 interface SchemaFlags {

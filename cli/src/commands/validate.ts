@@ -1,4 +1,4 @@
-import { Command, Option } from 'commander';
+import { Command, Option } from './commander.js';
 import { DEFAULT_TOLERANCE } from '../runner/tolerance.js';
 import { EXIT_CODES_HELP, setExitCode, type CliContext } from './context.js';
 import { FORMATS, colorOption, type Format } from './options.js';

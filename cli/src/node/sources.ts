@@ -3,7 +3,8 @@
  * directories (recursively, `*.json`), globs (tinyglobby) and `-` for standard input. Anything that
  * cannot be read becomes a source carrying a CalcError, so the run reports it and goes on.
  */
-import { lstat, open, readdir, realpath, stat } from 'node:fs/promises';
+import { closeSync, fstatSync, openSync, readFileSync } from 'node:fs';
+import { lstat, readdir, realpath, stat } from 'node:fs/promises';
 import { isAbsolute, join, relative, resolve, sep } from 'node:path';
 import { sourceError, type Source } from '../runner/source.js';
 
@@ -61,12 +62,16 @@ function formatBytes(n: number): string {
   return n >= 1024 * 1024 ? `${(n / (1024 * 1024)).toFixed(1)} MB` : `${Math.ceil(n / 1024)} kB`;
 }
 
-/** Reads one file, refusing files over the size limit before reading them. */
+/**
+ * Reads one file, refusing files over the size limit before reading them. Synchronous on purpose:
+ * files are read one after another anyway, and a thread-pool round trip per open, stat, read and
+ * close left a 1,000-file run idle for a third of its time.
+ */
 export async function readSource(absolute: string, name: string, maxBytes = MAX_FILE_BYTES): Promise<Source> {
-  let handle;
+  let fd: number | undefined;
   try {
-    handle = await open(absolute, 'r');
-    const info = await handle.stat();
+    fd = openSync(absolute, 'r');
+    const info = fstatSync(fd);
     if (info.isDirectory()) return sourceError(name, 'read-error', 'is a directory');
     if (info.size > maxBytes) {
       return sourceError(
@@ -75,13 +80,12 @@ export async function readSource(absolute: string, name: string, maxBytes = MAX_
         `the file is ${formatBytes(info.size)}; calc files over ${formatBytes(maxBytes)} are refused`,
       );
     }
-    const text = await handle.readFile({ encoding: 'utf8' });
-    return { file: name, text };
+    return { file: name, text: readFileSync(fd, 'utf8') };
   } catch (err) {
     const { rule, message } = describeFsError(err);
     return sourceError(name, rule, message);
   } finally {
-    await handle?.close();
+    if (fd !== undefined) closeSync(fd);
   }
 }
 

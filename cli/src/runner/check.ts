@@ -22,6 +22,12 @@ export interface RunContext {
   readonly settings: CheckSettings;
   /** Package version of the running CLI. */
   readonly version: string;
+  /**
+   * Keep each direction's k least chains in the report (default true). Only the JSON result
+   * document prints them; the other formats drop them as each file is done, so a long run holds
+   * little per file.
+   */
+  readonly keepLeastChains?: boolean;
 }
 
 /** The tool block of every report. */
@@ -119,7 +125,10 @@ export function checkSource(source: Source, ctx: RunContext): FileReport {
       column: at.column,
       ...(calcMember.description !== undefined ? { description: calcMember.description } : {}),
       input: calcMember.input,
-      result: m.result,
+      result:
+        ctx.keepLeastChains === false
+          ? { ...m.result, directions: m.result.directions.map((d) => ({ ...d, leastChains: [] })) }
+          : m.result,
       findings,
     };
   });
