@@ -170,6 +170,17 @@ describe('auditMember', () => {
     ]);
   });
 
+  it('reports a listed controlling chain that cannot form once, as an error, without also calling it LG125', () => {
+    const found = audit({
+      chains: [{ holes: ['A1', 'B1', 'C1'] }],
+      controllingChain: { holes: ['A1', 'B1', 'C1'] },
+    }).findings;
+    expect(found.map((f) => [f.code, f.severity])).toEqual([
+      ['LG121', 'error'],
+      ['LG122', 'error'],
+    ]);
+  });
+
   it('reports claimed chains that do not exist (LG123) at the offending hole', () => {
     const found = audit({
       chains: [{ holes: ['A1', 'Z9'] }, { holes: ['C1', 'B1'] }, { holes: [] }],

@@ -229,7 +229,7 @@ export function auditMember(
     const ownDirection = controlling.direction;
     const d = result.directions.find((r) => r.direction === (ownDirection ?? result.governingDirection));
     const admissibleHere =
-      chain !== null && (!ownDirection || chainRejection(chain, layout, ownDirection) === null);
+      chain !== null && d !== undefined && chainRejection(chain, layout, d.direction) === null;
     if (chain && d?.governing && !rejected && admissibleHere && !sameHoles(chain.holes, d.governing.holes)) {
       const governing = d.governing;
       if (
