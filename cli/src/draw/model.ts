@@ -263,16 +263,29 @@ export function buildDrawing(member: MemberInput, result: MemberResult, options:
   shapes.push(text([ax[0] + 11.5, ax[1] + 0.9], 'x', TEXT.dim, 'label', { anchor: 'start', italic: true }));
   shapes.push(text([ax[0], ax[1] - 11.5], 'y', TEXT.dim, 'label', { anchor: 'middle', italic: true }));
 
-  // Hole ids, up and to the right of each hole.
+  // Hole ids at the corner of each hole farthest from the fracture lines, so no line crosses them.
+  const fractureSegments = shapes.flatMap((sh) =>
+    sh.kind === 'fracture' ? sh.points.slice(1).map((p, i) => [sh.points[i]!, p] as const) : [],
+  );
   for (const h of holes) {
     const w = widths.get(h.id);
     const rx = ((w?.nominalAlong ?? 0) * k) / 2;
     const ry = ((w?.nominalAcross ?? 0) * k) / 2;
-    shapes.push(
-      text([X(h.x) + rx * 0.75 + 0.8, Y(h.y) - ry * 0.75 - 0.8], h.id, TEXT.id, 'hole-id', {
-        anchor: 'start',
-      }),
-    );
+    const cx = X(h.x);
+    const cy = Y(h.y);
+    const corners = [
+      { at: [cx + rx * 0.75 + 0.8, cy - ry * 0.75 - 0.8] as Point, anchor: 'start' as const },
+      { at: [cx - rx * 0.75 - 0.8, cy - ry * 0.75 - 0.8] as Point, anchor: 'end' as const },
+      { at: [cx + rx * 0.75 + 0.8, cy + ry * 0.75 + 2.6] as Point, anchor: 'start' as const },
+      { at: [cx - rx * 0.75 - 0.8, cy + ry * 0.75 + 2.6] as Point, anchor: 'end' as const },
+    ];
+    const clearance = (c: (typeof corners)[number]): number => {
+      // Judge the middle of the label, not its anchor.
+      const mid: Point = [c.at[0] + (c.anchor === 'start' ? 1 : -1) * h.id.length * 0.6, c.at[1] - 0.8];
+      return Math.min(Infinity, ...fractureSegments.map(([a, b]) => distanceToSegment(mid, a, b)));
+    };
+    const best = corners.reduce((a, b) => (clearance(b) > clearance(a) + 0.5 ? b : a));
+    shapes.push(text(best.at, h.id, TEXT.id, 'hole-id', { anchor: best.anchor }));
   }
 
   shapes.push(...titleBlock(member, result, options, sheetW, sheetH, scale));
@@ -286,6 +299,14 @@ export function buildDrawing(member: MemberInput, result: MemberResult, options:
     title: `${member.id}: ${member.holes.length} holes, ${lengthLabel(member.thickness, units)} × ${lengthLabel(W, units)} ${units} plate, scale 1:${scale}`,
     shapes,
   };
+}
+
+function distanceToSegment(p: Point, a: Point, b: Point): number {
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
+  const len2 = dx * dx + dy * dy;
+  const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / len2));
+  return Math.hypot(p[0] - (a[0] + t * dx), p[1] - (a[1] + t * dy));
 }
 
 /** A straight end edge with the usual Z-shaped break in its middle. */
