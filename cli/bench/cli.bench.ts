@@ -95,6 +95,11 @@ function generate(dir: string, count: number): { holes: number; max: number } {
   return { holes, max };
 }
 
+const asJson = process.argv.includes('--json');
+const say = (line: string): void => {
+  if (!asJson) console.log(line);
+};
+
 const work = mkdtempSync(join(tmpdir(), 'ligament-bench-'));
 try {
   // 1. Cold start.
@@ -109,10 +114,10 @@ try {
     help.push(timeRun([bin, '--help']).ms);
   }
   const ratio = median(help) / median(bare);
-  console.log('cold start (15 runs each, interleaved)');
-  console.log(`  node -e 0                 median ${median(bare).toFixed(1)} ms`);
-  console.log(`  node dist/cli.js --help   median ${median(help).toFixed(1)} ms`);
-  console.log(`  ratio ${ratio.toFixed(3)} (target ≤ 1.25) ${ratio <= 1.25 ? 'met' : 'NOT met'}`);
+  say('cold start (15 runs each, interleaved)');
+  say(`  node -e 0                 median ${median(bare).toFixed(1)} ms`);
+  say(`  node dist/cli.js --help   median ${median(help).toFixed(1)} ms`);
+  say(`  ratio ${ratio.toFixed(3)} (target ≤ 1.25) ${ratio <= 1.25 ? 'met' : 'NOT met'}`);
 
   // 2. Throughput and memory. A preload hook prints the process's peak RSS at exit.
   const hook = join(work, 'rss-hook.mjs');
@@ -135,14 +140,24 @@ try {
   };
   const small = measure(250);
   const full = measure(1000);
-  console.log('ligament check over generated calc files (text report to a file)');
-  console.log(
+  say('ligament check over generated calc files (text report to a file)');
+  say(
     `  250 files  (${small.holes} holes, up to ${small.max} per member): ${small.ms.toFixed(0)} ms, peak RSS ${small.rssMb.toFixed(1)} MB`,
   );
-  console.log(
+  say(
     `  1000 files (${full.holes} holes, up to ${full.max} per member): ${full.ms.toFixed(0)} ms (target ≤ 3000 ms) ${full.ms <= 3000 ? 'met' : 'NOT met'}, peak RSS ${full.rssMb.toFixed(1)} MB`,
   );
-  console.log(`  peak RSS growth 250 → 1000 files: ${(full.rssMb - small.rssMb).toFixed(1)} MB`);
+  say(`  peak RSS growth 250 → 1000 files: ${(full.rssMb - small.rssMb).toFixed(1)} MB`);
+  if (asJson) {
+    console.log(
+      JSON.stringify({
+        bench: 'cli',
+        coldStart: { bareMedianMs: median(bare), helpMedianMs: median(help), ratio, target: 1.25 },
+        check1000: { wallMs: full.ms, peakRssMb: full.rssMb, holes: full.holes, targetMs: 3000 },
+        check250: { wallMs: small.ms, peakRssMb: small.rssMb, holes: small.holes },
+      }),
+    );
+  }
 } finally {
   rmSync(work, { recursive: true, force: true });
 }
