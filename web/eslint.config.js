@@ -70,7 +70,9 @@ export default tseslint.config(
     },
   })),
   {
-    files: ['e2e/**/*.mjs', 'bench/**/*.mjs', 'vite.config.ts', 'eslint.config.js'],
+    files: ['e2e/**/*.mjs', 'bench/**/*.mjs', 'vite.config.ts', 'vite/**/*.ts', 'eslint.config.js'],
     languageOptions: { globals: { ...globals.node } },
   },
+  // Browser tests pass functions to page.evaluate, which run in the page.
+  { files: ['e2e/**/*.mjs'], languageOptions: { globals: { ...globals.node, ...globals.browser } } },
 );

@@ -1,6 +1,7 @@
 import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
 import { defineConfig } from 'vitest/config';
+import { calcValidatorPlugin } from './vite/calc-validator-plugin.ts';
 
 const here = (relative: string) => fileURLToPath(new URL(relative, import.meta.url));
 
@@ -17,7 +18,15 @@ const ligamentSources = {
 const apiTarget = 'http://127.0.0.1:3000';
 
 export default defineConfig({
-  plugins: [react()],
+  plugins: [
+    react(),
+    calcValidatorPlugin({
+      cliPackageJson: here('../cli/package.json'),
+      schemaJson: here('../cli/schema/calc.schema.json'),
+      schemaModule: here('../cli/src/calc/schema.ts'),
+      validateSchemaModule: here('../cli/src/calc/validateSchema.ts'),
+    }),
+  ],
   resolve: {
     alias: { ...ligamentSources, '@': here('./src') },
   },

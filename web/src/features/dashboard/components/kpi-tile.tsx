@@ -32,7 +32,9 @@ export function KpiTile({ label, value, detail, testId }: KpiTileProps) {
   return (
     <div className={styles.tile} data-testid={testId}>
       <Text weight="semibold">{label}</Text>
-      <span className={styles.value}>{value}</span>
+      <span className={styles.value} data-testid={testId ? `${testId}-value` : undefined}>
+        {value}
+      </span>
       {detail && <Text size={200}>{detail}</Text>}
     </div>
   );

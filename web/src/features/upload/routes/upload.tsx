@@ -83,7 +83,7 @@ export function Component() {
               line: 1,
               column: 1,
               rule: 'read',
-              message: describeError(error),
+              message: error instanceof Error ? `${error.name}: ${error.message}` : describeError(error),
             },
           ],
         }))

@@ -1,0 +1,289 @@
+// Browser run of the whole review loop against the real built service on a temporary database:
+// an owner's rep notes the dashboard; a checker signs in, uploads three files (after the browser has
+// refused a broken one), reads the discrepancies and makes a move; a consultant answers one and makes
+// a CI token; the checker accepts it and stamps; the owner's rep sees the dashboard change. Any console
+// error fails the run. Screenshots of every screen go to e2e/artifacts/.
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { artifacts, createRunner, launchBrowser, repoRoot, startServer, webRoot } from './harness.mjs';
+
+const PASSWORD = 'lantern-demo-2026';
+const PEOPLE = {
+  checker: 'tomasz@larchmont-review.example.test',
+  consultant: 'priya@fennick-ode.example.test',
+  ownerRep: 'adaeze@tidewater-crossing.example.test',
+  admin: 'sam@tidewater-crossing.example.test',
+};
+const fixture = (name) => join(webRoot, 'e2e', 'fixtures', name);
+
+for (const needed of [join(repoRoot, 'api', 'dist', 'main.js'), join(webRoot, 'dist', 'index.html')]) {
+  if (!existsSync(needed)) {
+    console.error(`Missing ${needed}: run \`npm run build\` at the repository root first.`);
+    console.log('0 passed, 1 failed');
+    process.exit(1);
+  }
+}
+
+const runner = createRunner();
+const server = await startServer();
+const browser = await launchBrowser();
+const page = browser.context.pages()[0] ?? (await browser.context.newPage());
+page.setDefaultTimeout(15_000);
+const consoleErrors = [];
+page.on('console', (msg) => {
+  if (msg.type() === 'error') consoleErrors.push(`${msg.text()} @ ${page.url()}`);
+});
+page.on('pageerror', (error) => consoleErrors.push(`page error: ${error.message} @ ${page.url()}`));
+
+const shot = async (name) => {
+  await page.waitForTimeout(150);
+  await page.screenshot({ path: join(artifacts, `${name}.png`), fullPage: true });
+};
+/** Client-side navigation: a reload would end the in-memory session. */
+const go = async (path) => {
+  await page.evaluate((p) => {
+    window.history.pushState({}, '', p);
+    window.dispatchEvent(new PopStateEvent('popstate'));
+  }, path);
+};
+const signIn = async (email, redirectTo) => {
+  await page.goto(
+    `${server.baseUrl}/sign-in${redirectTo ? `?redirectTo=${encodeURIComponent(redirectTo)}` : ''}`,
+  );
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(PASSWORD);
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
+  await page.getByRole('button', { name: /Account menu for/ }).waitFor();
+};
+const signOut = async () => {
+  await page.getByRole('button', { name: /Account menu for/ }).click();
+  await page.getByRole('menuitem', { name: 'Sign out' }).click();
+  await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+};
+const expect = (condition, message) => {
+  if (!condition) throw new Error(message);
+};
+const openCount = async () => Number((await page.getByTestId('kpi-open-value').textContent())?.trim());
+
+let openBefore = NaN;
+let projectId = NaN;
+let submittalId = NaN;
+
+console.log(`Browser run against ${server.baseUrl}`);
+try {
+  await runner.step('sign-in page renders with the caution and demo accounts', async () => {
+    await page.goto(`${server.baseUrl}/sign-in`);
+    await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+    await page.getByText('Ligament is a checking aid.').first().waitFor();
+    await page.getByRole('button', { name: 'Sign in as Tomasz Quell' }).waitFor();
+    await shot('01-sign-in');
+  });
+
+  await runner.step("owner's rep sees the dashboard", async () => {
+    await signIn(PEOPLE.ownerRep);
+    await page.getByRole('heading', { name: 'Open discrepancies' }).waitFor();
+    await page.getByTestId('kpi-open').waitFor();
+    openBefore = await openCount();
+    expect(Number.isFinite(openBefore), 'open count is a number');
+    await shot('02-dashboard-before');
+    await signOut();
+  });
+
+  await runner.step('checker signs in and sees the projects with open counts by class', async () => {
+    await signIn(PEOPLE.checker);
+    await page.getByRole('heading', { name: 'Your projects' }).waitFor();
+    const card = page.getByTestId('project-card').filter({ hasText: 'Harbour Lantern Footbridge' });
+    await card.getByRole('list', { name: 'Open findings by class' }).waitFor();
+    await shot('03-projects');
+    await card.getByRole('link', { name: 'Harbour Lantern Footbridge' }).click();
+    await page.getByRole('heading', { name: 'Submittals and revisions' }).waitFor();
+    projectId = Number(new URL(page.url()).pathname.split('/')[2]);
+    await page.locator('.recharts-surface').first().waitFor();
+    await shot('04-project-overview');
+  });
+
+  await runner.step('the browser refuses a broken calc file with line, column and pointer', async () => {
+    await page.getByRole('button', { name: 'Upload calc files' }).click();
+    await page.getByRole('heading', { name: 'Upload calc files' }).waitFor();
+    await page.getByTestId('calc-file-input').setInputFiles(fixture('broken-anchor-plate.json'));
+    const item = page.getByTestId('file-check').filter({ hasText: 'broken-anchor-plate.json' });
+    await item.getByText(/error.* — fix before uploading/).waitFor();
+    const text = await item.textContent();
+    expect(
+      /line \d+, column \d+ · \/members\/0/.test(text ?? ''),
+      `errors name line, column and pointer: ${text}`,
+    );
+    await shot('05-upload-invalid');
+    await item.getByRole('button', { name: 'Remove broken-anchor-plate.json' }).click();
+  });
+
+  await runner.step('checker uploads three files and reads the server summary', async () => {
+    await page
+      .getByTestId('calc-file-input')
+      .setInputFiles([
+        fixture('hanger-plates.json'),
+        fixture('splice-plates.json'),
+        fixture('gusset-g2.json'),
+      ]);
+    await page
+      .getByText(/^Valid · /)
+      .nth(2)
+      .waitFor();
+    await page.getByLabel('Submittal title').fill('Issue C — hangers, chord splice, mast gusset');
+    await shot('06-upload-ready');
+    await page.getByRole('button', { name: /Upload 3 files and check/ }).click();
+    const summary = page.getByTestId('upload-summary');
+    await summary.waitFor({ timeout: 30_000 });
+    submittalId = Number(/Submittal #(\d+)/.exec((await summary.textContent()) ?? '')?.[1]);
+    expect(Number.isInteger(submittalId), 'summary names the submittal');
+    await shot('07-upload-summary');
+  });
+
+  await runner.step(
+    'the submittal shows the drawing, chains, claims and findings; hovering a chain traces it',
+    async () => {
+      await page.getByRole('button', { name: 'Open the submittal' }).click();
+      await page.getByRole('tab', { name: /splice-plates\.json/ }).click();
+      await page.getByTestId('member-drawing').waitFor();
+      await page
+        .getByRole('table', { name: 'Claimed against recomputed' })
+        .getByText(/overstated by/)
+        .first()
+        .waitFor();
+      const row = page.getByRole('row', { name: /^Chain / }).first();
+      await row.hover();
+      await page.locator('[data-highlighted-chain]').waitFor();
+      await shot('08-submittal-member');
+    },
+  );
+
+  await runner.step('checker sees the discrepancies and waives one with a reason', async () => {
+    await go(`/discrepancies?projectId=${projectId}&submittalId=${submittalId}`);
+    await page.getByTestId('discrepancy-row').first().waitFor();
+    await shot('09-discrepancies');
+    const detailRow = page.getByTestId('discrepancy-row').filter({ hasText: 'Understated' }).first();
+    await detailRow.getByRole('button', { name: /Open .* details/ }).click();
+    const detail = page.getByTestId('discrepancy-detail');
+    await detail.getByRole('button', { name: 'Waive' }).click();
+    await detail
+      .getByLabel('Why it is waived')
+      .fill('Conservative claim on the mast gusset; no change needed.');
+    await detail.getByRole('button', { name: /Waive: move to Waived/ }).click();
+    await detail.getByText('Waived', { exact: true }).first().waitFor();
+    await shot('10-discrepancy-waived');
+  });
+
+  await runner.step('the revision view of a seeded revision shows the calc-file diff', async () => {
+    await go(`/projects/${projectId}`);
+    const revision = page
+      .getByRole('link', { name: /#\d+ .*/ })
+      .filter({ hasText: /issue B/i })
+      .first();
+    await revision.click();
+    await page.getByRole('tab', { name: /Changes from #/ }).click();
+    await page
+      .getByRole('region', { name: /Changes in/ })
+      .first()
+      .waitFor();
+    await shot('11-revision-diff');
+  });
+
+  await runner.step('consultant answers a discrepancy and creates a CI token', async () => {
+    await signOut();
+    await signIn(
+      PEOPLE.consultant,
+      `/discrepancies?projectId=${projectId}&submittalId=${submittalId}&status=raised`,
+    );
+    const row = page.getByTestId('discrepancy-row').filter({ hasText: 'Overstated' }).first();
+    await row.getByRole('button', { name: /Open .* details/ }).click();
+    const detail = page.getByTestId('discrepancy-detail');
+    await detail.getByRole('button', { name: 'Answer' }).click();
+    await detail
+      .getByLabel(/Your answer/)
+      .fill('SP-1 An revised: the zigzag A1–B1–A2 governs; calc updated in issue D.');
+    await detail.getByRole('button', { name: /Answer: move to Answered/ }).click();
+    await detail.getByText('Answered', { exact: true }).first().waitFor();
+    await shot('12-consultant-answered');
+    await go('/account');
+    await page.getByLabel('Token name').fill('CI — harbour-lantern repository');
+    await page.getByRole('button', { name: 'Create token' }).click();
+    await page
+      .getByTestId('new-token')
+      .getByText(/npx ligament submit --server/)
+      .waitFor();
+    await shot('13-account-token');
+  });
+
+  await runner.step('checker accepts the answer and stamps the submittal', async () => {
+    await signOut();
+    await signIn(
+      PEOPLE.checker,
+      `/discrepancies?projectId=${projectId}&submittalId=${submittalId}&status=answered`,
+    );
+    const row = page.getByTestId('discrepancy-row').first();
+    await row.getByRole('button', { name: /Open .* details/ }).click();
+    const detail = page.getByTestId('discrepancy-detail');
+    await detail.getByRole('button', { name: 'Accept' }).click();
+    await detail.getByRole('button', { name: /Accept: move to Accepted/ }).click();
+    await detail.getByText('Accepted', { exact: true }).first().waitFor();
+    await go(`/submittals/${submittalId}`);
+    await page.getByRole('button', { name: 'Stamp…' }).click();
+    await page.getByRole('radio', { name: 'Revise and resubmit' }).check();
+    await page
+      .getByLabel('Comment to the consultant')
+      .fill('Missed zigzag chain on SP-1; revise and resubmit.');
+    const override = page.getByLabel('Reason for stamping with open errors');
+    if (await override.count())
+      await override.fill('Returned for revision; the open errors go back with the stamp.');
+    await shot('14-stamp-dialog');
+    await page.getByRole('button', { name: 'Stamp', exact: true }).click();
+    await page.getByText(/Stamped: Revise and resubmit/).waitFor();
+    await go(`/submittals/${submittalId}/report`);
+    await page
+      .getByRole('article', { name: 'Review report' })
+      .getByText('Ligament is a checking aid.')
+      .first()
+      .waitFor();
+    await shot('15-review-report');
+  });
+
+  await runner.step("owner's rep sees the dashboard change", async () => {
+    await signOut();
+    await signIn(PEOPLE.ownerRep);
+    await page.getByTestId('kpi-open').waitFor();
+    const after = await openCount();
+    expect(after !== openBefore, `open count changed (before ${openBefore}, after ${after})`);
+    await shot('16-dashboard-after');
+    await page.setViewportSize({ width: 820, height: 1100 });
+    await shot('17-dashboard-tablet');
+    await page.setViewportSize({ width: 1280, height: 860 });
+  });
+
+  await runner.step('admin sees users, invitations and projects; the demo mailbox has mail', async () => {
+    await signOut();
+    await signIn(PEOPLE.admin, '/admin');
+    await page.getByRole('table', { name: 'Users' }).waitFor();
+    await shot('18-admin-users');
+    await page.getByRole('tab', { name: 'Projects and members' }).click();
+    await page.getByRole('table', { name: 'Project members' }).waitFor();
+    await shot('19-admin-projects');
+    await go('/mailbox');
+    await page.getByRole('heading', { name: 'Demo mailbox' }).waitFor();
+    await page.getByRole('heading', { name: /messages/ }).waitFor();
+    await shot('20-mailbox');
+  });
+
+  await runner.step('discrepancies at tablet width', async () => {
+    await page.setViewportSize({ width: 820, height: 1100 });
+    await go(`/discrepancies?projectId=${projectId}`);
+    await page.getByTestId('discrepancy-row').first().waitFor();
+    await shot('21-discrepancies-tablet');
+  });
+} finally {
+  if (consoleErrors.length > 0) runner.fail('no console errors', consoleErrors.join('\n    '));
+  await browser.close();
+  await server.stop();
+}
+
+const ok = runner.summary();
+process.exitCode = ok ? 0 : 1;
