@@ -376,6 +376,11 @@ function horizontalDimension(
 }
 
 const KIND_TEXT: Record<MemberInput['kind'], string> = {
+  angle: 'angle (legs unfolded)',
+  'double-angle': 'double angle (legs unfolded)',
+  tee: 'tee (unfolded)',
+  'w-shape': 'W-shape (unfolded)',
+  channel: 'channel (unfolded)',
   plate: 'plate',
   'splice-plate': 'splice plate',
   gusset: 'gusset plate',

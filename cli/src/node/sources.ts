@@ -31,6 +31,9 @@ interface Walked {
  * `format` or `members` (package.json, fixtures, expectation files) is skipped.
  */
 export function looksLikeCalc(text: string): boolean {
+  const start = text.trimStart();
+  // The common case, decided without parsing: an object naming the calc file's own keys.
+  if (start.startsWith('{') && (text.includes('"format"') || text.includes('"members"'))) return true;
   let value: unknown;
   try {
     value = JSON.parse(text);
