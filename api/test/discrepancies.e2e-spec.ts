@@ -283,6 +283,18 @@ describe('bulk moves, comments, acknowledgement, list', () => {
       (await request(t.http).get('/api/projects/1/discrepancies?severity=fatal').set(bearer(tok.owner)))
         .status,
     ).toBe(400);
+    // The list's SQL-built items carry exactly the fields of the detail view.
+    const first = all.body.items[0] as Record<string, unknown>;
+    const detail = await request(t.http)
+      .get(`/api/discrepancies/${String(first.id)}`)
+      .set(bearer(tok.owner));
+    expect(Object.fromEntries(Object.keys(first).map((k) => [k, detail.body[k]]))).toEqual(first);
+    const extra = ['raisedBy', 'submittalTitle', 'history', 'comments', 'allowedMoves', 'canAcknowledge'];
+    expect(Object.keys(first).sort()).toEqual(
+      Object.keys(detail.body)
+        .filter((k) => !extra.includes(k))
+        .sort(),
+    );
   });
 
   it('keeps the event log append-only', async () => {

@@ -35,6 +35,19 @@ export class ProjectAccessService {
     }
   }
 
+  /**
+   * The project behind a project id and the caller's membership, in one query (the guard runs on
+   * every project-scoped request). null when the project does not exist.
+   */
+  async projectMembership(projectId: number, userId: number): Promise<{ member: boolean } | null> {
+    const [rows] = await this.projects.sequelize!.query(
+      'SELECT EXISTS (SELECT 1 FROM project_members WHERE projectId = :projectId AND userId = :userId) AS member FROM projects WHERE id = :projectId',
+      { replacements: { projectId, userId } },
+    );
+    const row = (rows as { member: number }[])[0];
+    return row ? { member: row.member === 1 } : null;
+  }
+
   async isMember(projectId: number, userId: number): Promise<boolean> {
     return (await this.members.count({ where: { projectId, userId } })) > 0;
   }

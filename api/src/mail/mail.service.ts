@@ -3,7 +3,7 @@ import type { ConfigType } from '@nestjs/config';
 import { InjectModel } from '@nestjs/sequelize';
 import nodemailer from 'nodemailer';
 import type { Transporter } from 'nodemailer';
-import { Op, type Transaction } from 'sequelize';
+import { col, fn, Op, type Transaction } from 'sequelize';
 import { mailConfig } from '../config/index.js';
 import { OutboxMessage, type MailKind } from './models/outbox-message.model.js';
 import { SmtpFakeService } from './smtp-fake.service.js';
@@ -94,24 +94,29 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
   }
 
   async health(): Promise<MailHealth> {
-    const pending = await this.outbox.findAll({
-      where: { status: 'pending' },
-      order: [['id', 'ASC']],
-      limit: 1,
-    });
-    const count = await this.outbox.count({ where: { status: 'pending' } });
-    const failing = await this.outbox.findOne({
-      where: { status: 'pending', attempts: { [Op.gt]: 0 } },
-      order: [['updatedAt', 'DESC']],
-    });
-    const first = pending[0];
+    const [pending, failing] = await Promise.all([
+      this.outbox.findOne({
+        where: { status: 'pending' },
+        attributes: [
+          [fn('COUNT', col('id')), 'count'],
+          [fn('MIN', col('createdAt')), 'oldest'],
+        ],
+        raw: true,
+      }) as Promise<{ count: number; oldest: string | null } | null>,
+      this.outbox.findOne({
+        where: { status: 'pending', attempts: { [Op.gt]: 0 } },
+        attributes: ['lastError'],
+        order: [['updatedAt', 'DESC']],
+        raw: true,
+      }),
+    ]);
     return {
       ok: (!this.fake.enabled || this.fake.running) && !failing,
       transport: `smtp://${this.config.host}:${this.port() ?? '?'}`,
       fake: this.fake.enabled,
       fakeRunning: this.fake.running,
-      pending: count,
-      oldestPendingAt: first ? new Date(first.createdAt).toISOString() : null,
+      pending: Number(pending?.count ?? 0),
+      oldestPendingAt: pending?.oldest ? new Date(pending.oldest).toISOString() : null,
       lastError: failing?.lastError ?? null,
     };
   }

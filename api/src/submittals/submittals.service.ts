@@ -127,35 +127,35 @@ export class SubmittalsService {
         },
         { transaction },
       );
+      // The transaction holds the write lock (BEGIN IMMEDIATE), so ids after MAX(id) are ours: the
+      // files go in with one bulk insert and results and discrepancies can point at them.
+      const firstFileId = ((await this.calcFiles.max<number, CalcFile>('id', { transaction })) ?? 0) + 1;
+      const fileRows = outcome.files.map((file, i) => ({
+        id: firstFileId + i,
+        submittalId: s.id,
+        fileName: file.name,
+        size: file.content.length,
+        sha256: file.sha256,
+        content: file.content,
+        document: file.document,
+        memberIds: file.document.members.map((m) => m.input.id),
+      }));
+      await this.calcFiles.bulkCreate(fileRows, { transaction });
       const resultRows: ReturnType<typeof memberResultRow>[] = [];
       const discrepancyRows: ReturnType<typeof discrepancyRow>[] = [];
-      for (const file of outcome.files) {
-        const row = await this.calcFiles.create(
-          {
-            submittalId: s.id,
-            fileName: file.name,
-            size: file.content.length,
-            sha256: file.sha256,
-            content: file.content,
-            document: file.document,
-            memberIds: file.document.members.map((m) => m.input.id),
-          },
-          { transaction },
-        );
+      outcome.files.forEach((file, i) => {
+        const calcFileId = firstFileId + i;
         for (const member of file.audit.members) {
           resultRows.push(
-            memberResultRow({ submittalId: s.id, calcFileId: row.id }, file.document, file.audit, member),
+            memberResultRow({ submittalId: s.id, calcFileId }, file.document, file.audit, member),
           );
           for (const finding of member.findings) {
             discrepancyRows.push(
-              discrepancyRow(
-                { projectId, submittalId: s.id, calcFileId: row.id, fileName: file.name },
-                finding,
-              ),
+              discrepancyRow({ projectId, submittalId: s.id, calcFileId, fileName: file.name }, finding),
             );
           }
         }
-      }
+      });
       await this.results.bulkCreate(resultRows, { transaction });
       await this.discrepancies.bulkCreate(discrepancyRows, { transaction });
       await this.events.record(

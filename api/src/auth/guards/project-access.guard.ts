@@ -32,13 +32,23 @@ export class ProjectAccessGuard implements CanActivate {
     const raw = request.params[scope.param];
     const id = Number(raw);
     if (!Number.isInteger(id) || id < 1) throw new NotFoundException(`No ${scope.kind} ${raw ?? ''}.`);
-    const projectId = await this.access.projectOf(scope.kind, id);
-    if (projectId === null) throw new NotFoundException(`No ${scope.kind} ${id}.`);
     const user = request.user;
+    let projectId: number | null;
+    let member: boolean;
+    if (scope.kind === 'project') {
+      // The common case, in one query: does the project exist, and is the caller on it.
+      const found = await this.access.projectMembership(id, user.id);
+      projectId = found ? id : null;
+      member = found?.member ?? false;
+    } else {
+      projectId = await this.access.projectOf(scope.kind, id);
+      member = projectId !== null && (await this.access.isMember(projectId, user.id));
+    }
+    if (projectId === null) throw new NotFoundException(`No ${scope.kind} ${id}.`);
     if (user.token) {
       if (user.token.projectId !== projectId)
         throw new ForbiddenException('This API token belongs to another project.');
-    } else if (user.role !== Role.Admin && !(await this.access.isMember(projectId, user.id))) {
+    } else if (user.role !== Role.Admin && !member) {
       throw new ForbiddenException('You are not a member of this project.');
     }
     request.projectId = projectId;

@@ -1,0 +1,228 @@
+#!/usr/bin/env node
+/**
+ * Service benchmark (needs a build: api/dist and cli/dist). Starts the built service in a child
+ * process on a temporary SQLite file, then measures on loopback:
+ *   1. upload + recompute of a 200-file submittal (target ≤ 3 s), and a recheck of it;
+ *   2. with 10,000 discrepancies stored, GET /api/projects/:id/discrepancies at 10 connections
+ *      against GET /api/health in the same run, in alternating rounds (targets: ≥ 0.7 × health req/s,
+ *      p99 ≤ 50 ms).
+ * Prints the figures and the ratio; exits 1 when a target is missed.
+ */
+import autocannon from 'autocannon';
+import { spawn } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import sqlite3 from 'sqlite3';
+
+const ROUNDS = 4;
+const ROUND_S = Number(process.env.BENCH_ROUND_S ?? 2);
+const CONNECTIONS = 10;
+const FILES = 200;
+const TARGET_DISCREPANCIES = 10_000;
+
+const apiDir = fileURLToPath(new URL('..', import.meta.url));
+const dir = mkdtempSync(join(tmpdir(), 'ligament-bench-'));
+const dbFile = join(dir, 'bench.sqlite');
+
+function freePort() {
+  return new Promise((resolve) => {
+    const s = createServer().listen(0, '127.0.0.1', () => {
+      const { port } = s.address();
+      s.close(() => resolve(port));
+    });
+  });
+}
+
+/** A splice plate with two staggered gauge pairs; every fourth claims too much net area. */
+function calcFile(i) {
+  const width = 12 + (i % 5);
+  const s = 1.5 + (i % 3) * 0.5;
+  const doc = {
+    $schema: 'urn:ligament:schema:calc:1.0',
+    format: 'ligament-calc',
+    formatVersion: '1.0',
+    meta: { project: 'Harbour Lantern Footbridge', preparedBy: 'Bench', date: '2026-11-20' },
+    units: 'in',
+    code: { standard: 'AISC 360-22', method: 'LRFD' },
+    members: [0, 1].map((m) => ({
+      id: `B-${i}-${m}`,
+      kind: 'splice-plate',
+      width,
+      thickness: '1/2',
+      material: { grade: 'A36', Fy: 36, Fu: 58 },
+      holes: [
+        { id: 'A1', x: 0, y: 2, bolt: '3/4' },
+        { id: 'B1', x: s, y: 5, bolt: '3/4' },
+        { id: 'C1', x: 0, y: 8, bolt: '3/4' },
+        { id: 'D1', x: s, y: width - 2, bolt: '3/4' },
+        { id: 'A2', x: 6, y: 2, bolt: '3/4' },
+        { id: 'B2', x: 6 + s, y: 5, bolt: '3/4' },
+        { id: 'C2', x: 6, y: 8, bolt: '3/4' },
+        { id: 'D2', x: 6 + s, y: width - 2, bolt: '3/4' },
+      ],
+      load: { directions: ['-x', '+x'], U: 1.0, required: 150 },
+      claims:
+        i % 4 === 0 ? { An: width * 0.5 - 0.875, chains: [{ holes: ['A1', 'C1'] }] } : { Ag: width * 0.5 },
+    })),
+  };
+  return Buffer.from(JSON.stringify(doc, null, 2));
+}
+
+async function json(res) {
+  const body = await res.json();
+  if (!res.ok) throw new Error(`${res.status} ${JSON.stringify(body).slice(0, 400)}`);
+  return body;
+}
+
+function run(db, sql) {
+  return new Promise((resolve, reject) => db.run(sql, (err) => (err ? reject(err) : resolve())));
+}
+function get(db, sql) {
+  return new Promise((resolve, reject) => db.get(sql, (err, row) => (err ? reject(err) : resolve(row))));
+}
+
+function cannon(url, headers) {
+  return autocannon({ url, connections: CONNECTIONS, duration: ROUND_S, headers });
+}
+
+/**
+ * The two routes in alternating rounds, so both see the same machine (2 shared cores): req/s is
+ * summed over the rounds, p99 is the worst round's.
+ */
+async function compare(a, b) {
+  const totals = [a, b].map(() => ({ requests: 0, seconds: 0, p99: 0, non2xx: 0 }));
+  for (let round = 0; round < ROUNDS; round++) {
+    for (const [i, target] of [a, b].entries()) {
+      const r = await cannon(target.url, target.headers);
+      const t = totals[i];
+      t.requests += r.requests.total;
+      t.seconds += r.duration;
+      t.p99 = Math.max(t.p99, r.latency.p99);
+      t.non2xx += r.non2xx;
+    }
+  }
+  return totals.map((t) => ({ reqPerS: t.requests / t.seconds, p99: t.p99, non2xx: t.non2xx }));
+}
+
+const port = await freePort();
+const base = `http://127.0.0.1:${port}`;
+const child = spawn(process.execPath, ['dist/main.js'], {
+  cwd: apiDir,
+  env: {
+    ...process.env,
+    PORT: String(port),
+    LIGAMENT_DB: dbFile,
+    LIGAMENT_DEMO: 'true',
+    LIGAMENT_PUBLIC_URL: base,
+    SMTP_FAKE: 'true',
+    SMTP_FAKE_PORT: '0',
+    THROTTLE_LIMIT: '100000000',
+    JWT_SECRET: 'bench-secret-0123456789abcdef',
+  },
+  stdio: ['ignore', 'pipe', 'inherit'],
+});
+let exitCode = 0;
+try {
+  await new Promise((resolve, reject) => {
+    let out = '';
+    child.stdout.on('data', (chunk) => {
+      out += chunk;
+      if (out.includes('Ligament is running at')) resolve();
+    });
+    child.once('exit', (code) => reject(new Error(`service exited with ${code}`)));
+  });
+
+  const login = await json(
+    await fetch(`${base}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email: 'tomasz@larchmont-review.example.test', password: 'lantern-demo-2026' }),
+    }),
+  );
+  const auth = { Authorization: `Bearer ${login.accessToken}` };
+
+  // 1. Upload + recompute of a 200-file submittal.
+  const form = new FormData();
+  form.append('title', `Bench: ${FILES} files`);
+  for (let i = 0; i < FILES; i++)
+    form.append('files', new Blob([calcFile(i)], { type: 'application/json' }), `bench-${i}.json`);
+  const t0 = performance.now();
+  const upload = await json(
+    await fetch(`${base}/api/projects/1/submittals`, { method: 'POST', headers: auth, body: form }),
+  );
+  const uploadMs = performance.now() - t0;
+  const t1 = performance.now();
+  const recheck = await json(
+    await fetch(`${base}/api/submittals/${upload.submittalId}/recheck`, { method: 'POST', headers: auth }),
+  );
+  const recheckMs = performance.now() - t1;
+
+  // 2. Bring the project to 10,000 stored discrepancies by copying real rows (same shape, same indexes).
+  const db = new sqlite3.Database(dbFile);
+  await run(db, 'PRAGMA busy_timeout = 10000');
+  const { n: have } = await get(db, 'SELECT COUNT(*) AS n FROM discrepancies WHERE projectId = 1');
+  const copies = Math.ceil((TARGET_DISCREPANCIES - have) / have);
+  const cols =
+    'projectId, submittalId, calcFileId, fileName, memberId, code, name, class, severity, direction, chain, claimed, recomputed, message, pointer, status, acknowledgedAt, acknowledgedById, createdAt, updatedAt';
+  await run(
+    db,
+    `INSERT INTO discrepancies (${cols})
+     WITH RECURSIVE k(i) AS (SELECT 1 UNION ALL SELECT i + 1 FROM k WHERE i < ${copies})
+     SELECT ${cols} FROM discrepancies, k WHERE projectId = 1`,
+  );
+  await run(
+    db,
+    `DELETE FROM discrepancies WHERE id IN (SELECT id FROM discrepancies WHERE projectId = 1 ORDER BY id DESC LIMIT (SELECT COUNT(*) - ${TARGET_DISCREPANCIES} FROM discrepancies WHERE projectId = 1))`,
+  );
+  const { n: stored } = await get(db, 'SELECT COUNT(*) AS n FROM discrepancies WHERE projectId = 1');
+  await new Promise((resolve) => db.close(resolve));
+
+  const listUrl = `${base}/api/projects/1/discrepancies?status=open&sort=severity&order=asc&page=3&pageSize=50`;
+  const probe = await json(await fetch(listUrl, { headers: auth }));
+  const [health, list] = await compare(
+    { url: `${base}/api/health`, headers: {} },
+    { url: listUrl, headers: auth },
+  );
+  const ratio = list.reqPerS / health.reqPerS;
+  const rows = [
+    [
+      'upload + recompute, 200 files',
+      `${uploadMs.toFixed(0)} ms`,
+      `${upload.summary.members} members, ${upload.summary.findings} findings`,
+      uploadMs <= 3000 ? 'ok (≤ 3000 ms)' : 'MISSED (≤ 3000 ms)',
+    ],
+    ['recheck of the same submittal', `${recheckMs.toFixed(0)} ms`, `changed: ${recheck.changed}`, ''],
+    [
+      'GET /api/health',
+      `${health.reqPerS.toFixed(0)} req/s`,
+      `p99 ${health.p99} ms, non-2xx ${health.non2xx}`,
+      '',
+    ],
+    [
+      `GET discrepancies (${stored} stored, ${probe.total} open)`,
+      `${list.reqPerS.toFixed(0)} req/s`,
+      `p99 ${list.p99} ms, non-2xx ${list.non2xx}`,
+      list.p99 <= 50 ? 'ok (p99 ≤ 50 ms)' : 'MISSED (p99 ≤ 50 ms)',
+    ],
+    ['ratio list / health', ratio.toFixed(2), '', ratio >= 0.7 ? 'ok (≥ 0.70)' : 'MISSED (≥ 0.70)'],
+  ];
+  process.stdout.write(
+    `\nLigament API bench (loopback, ${CONNECTIONS} connections, ${ROUNDS} alternating rounds of ${ROUND_S} s per route)\n`,
+  );
+  for (const r of rows)
+    process.stdout.write(`  ${r[0].padEnd(48)} ${r[1].padStart(12)}  ${r[2].padEnd(36)} ${r[3]}\n`);
+  if (uploadMs > 3000 || list.p99 > 50 || ratio < 0.7 || list.non2xx > 0 || health.non2xx > 0) exitCode = 1;
+} catch (error) {
+  process.stderr.write(`bench: ${error instanceof Error ? error.message : String(error)}\n`);
+  exitCode = 2;
+} finally {
+  // autocannon leaves requests in flight when its time is up; let the service answer them first.
+  await new Promise((resolve) => setTimeout(resolve, 500));
+  child.kill('SIGTERM');
+  await new Promise((resolve) => (child.exitCode !== null ? resolve() : child.once('exit', resolve)));
+  rmSync(dir, { recursive: true, force: true });
+}
+process.exitCode = exitCode;
