@@ -74,9 +74,9 @@ function member(m: MemberReport) {
     pointer: m.pointer,
     line: m.line,
     column: m.column,
-    kind: m.input.kind,
-    width: m.input.width,
-    thickness: m.input.thickness,
+    kind: m.plate.kind,
+    width: m.plate.width,
+    thickness: m.plate.thickness,
     result: {
       Ag: r.Ag,
       An: r.An,

@@ -60,11 +60,11 @@ function memberBlock(file: FileReport, m: MemberReport, report: RunReport, paint
   const units = fileUnits(file);
   const u = UNIT_LABELS[units];
   const r = m.result;
-  const input = m.input;
+  const input = m.plate;
   const out: string[] = [];
   const grade = input.material.grade ? `  ${input.material.grade}` : '';
   out.push(
-    `  ${paint.bold(m.memberId)}  ${input.kind}  PL ${fmtLength(input.thickness, units)} × ${fmtLength(input.width, units)} ${u.length}${grade}  ${input.holes.length} holes`,
+    `  ${paint.bold(m.memberId)}  ${input.kind}  PL ${fmtLength(input.thickness, units)} × ${fmtLength(input.width, units)} ${u.length}${grade}  ${input.holeCount} holes`,
   );
   const rows: string[][] = [['dir', 'governing chain', `wn ${u.length}`, `An ${u.area}`, 'equal share']];
   for (const d of r.directions) {

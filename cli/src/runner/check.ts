@@ -23,11 +23,11 @@ export interface RunContext {
   /** Package version of the running CLI. */
   readonly version: string;
   /**
-   * Keep each direction's k least chains in the report (default true). Only the JSON result
-   * document prints them; the other formats drop them as each file is done, so a long run holds
-   * little per file.
+   * Keep each direction's k least chains and the per-hole widths in the report (default true).
+   * Only the JSON result document prints them; the other formats drop them as each file is done,
+   * so a long run holds little per file.
    */
-  readonly keepLeastChains?: boolean;
+  readonly keepDetail?: boolean;
 }
 
 /** The tool block of every report. */
@@ -124,10 +124,20 @@ export function checkSource(source: Source, ctx: RunContext): FileReport {
       line: at.line,
       column: at.column,
       ...(calcMember.description !== undefined ? { description: calcMember.description } : {}),
-      input: calcMember.input,
+      plate: {
+        kind: calcMember.input.kind,
+        width: calcMember.input.width,
+        thickness: calcMember.input.thickness,
+        material: calcMember.input.material,
+        holeCount: calcMember.input.holes.length,
+      },
       result:
-        ctx.keepLeastChains === false
-          ? { ...m.result, directions: m.result.directions.map((d) => ({ ...d, leastChains: [] })) }
+        ctx.keepDetail === false
+          ? {
+              ...m.result,
+              holeWidths: [],
+              directions: m.result.directions.map((d) => ({ ...d, leastChains: [] })),
+            }
           : m.result,
       findings,
     };

@@ -43,9 +43,19 @@ export interface MemberReport {
   readonly line: number;
   readonly column: number;
   readonly description?: string;
-  readonly input: MemberInput;
+  /** What the reports say about the member itself (the holes stay in the file). */
+  readonly plate: MemberSummary;
   readonly result: MemberResult;
   readonly findings: readonly LocatedFinding[];
+}
+
+/** The member facts a report prints: kind, plate size, material and how many holes. */
+export interface MemberSummary {
+  readonly kind: MemberInput['kind'];
+  readonly width: number;
+  readonly thickness: number;
+  readonly material: MemberInput['material'];
+  readonly holeCount: number;
 }
 
 /** One input file: either checked (members with results) or invalid (errors only). */
