@@ -60,6 +60,12 @@ export const COMMANDS: readonly CommandEntry[] = [
     summary: 'print the bundled calc-file JSON Schema (or the result-document schema)',
     load: async () => (await import('./commands/schema.js')).schemaCommand,
   },
+  {
+    name: 'submit',
+    args: '<path...>',
+    summary: 'upload calc files as one submittal to a Ligament service and print its summary and web address',
+    load: async () => (await import('./commands/submit.js')).submitCommand,
+  },
 ];
 
 /** The command a command line asks for: the first argument that is not an option (after `help`). */
