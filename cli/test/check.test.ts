@@ -1,4 +1,4 @@
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { EXAMPLES, lineOf, run, tempDir } from './helpers.js';
@@ -157,6 +157,18 @@ describe('ligament check', () => {
       expect(r.stderr).toContain('wrote json report');
       const doc = JSON.parse(readFileSync(join(dir.path, 'out', 'report.json'), 'utf8')) as Doc;
       expect(doc.files[0]!.members[0]!.id).toBe('SP-N1');
+    } finally {
+      dir.remove();
+    }
+  });
+
+  it('--output into a directory is exit 2 with one line and leaves no temporary file', async () => {
+    const dir = tempDir();
+    try {
+      const r = await run(['check', ex('north-splice-correct.json'), '--output', '.'], { cwd: dir.path });
+      expect(r.exitCode).toBe(2);
+      expect(r.stderr).toBe(`ligament: error: cannot write ${dir.path}: it is a directory\n`);
+      expect(readdirSync(dir.path)).toEqual([]);
     } finally {
       dir.remove();
     }
