@@ -10,6 +10,7 @@ export async function writeFileAtomic(cwd: string, path: string, text: string): 
   } catch (err) {
     throw new Error(
       `cannot create the folder for ${target}: ${err instanceof Error ? err.message : String(err)}`,
+      { cause: err },
     );
   }
   const temp = `${target}.${process.pid}.${Date.now()}.tmp`;
