@@ -392,6 +392,41 @@ describe('API token scope', () => {
     expect(res.status).toBe(403);
   });
 
+  it('is what `ligament submit` uses: summary and web address out, exit codes as check', async () => {
+    // The command's runner from the CLI sources (not part of the package's exports; outside this
+    // workspace's type-check, so typed here by hand).
+    const cliSubmit = '../../cli/src/commands/submit.js';
+    const { runSubmit } = (await import(cliSubmit)) as {
+      runSubmit: (
+        req: object,
+        fetchImpl: (url: string, init: RequestInit) => Promise<Response>,
+      ) => Promise<{ stdout: string; stderr: string; exitCode: number }>;
+    };
+    await t.app.listen(0, '127.0.0.1');
+    const server = await t.app.getUrl();
+    const base = { server, token, projectId: 1, title: 'CLI', format: 'text' as const };
+    const files = [{ name: 'cli.json', text: calcFile('SP-CLI', { claims: { An: 6.0 } }).toString() }];
+    const failing = await runSubmit({ ...base, failOn: 'overstated', files }, (url, init) =>
+      fetch(url, init),
+    );
+    expect(failing.exitCode).toBe(1);
+    expect(failing.stdout).toMatch(/Submittal \d+ "CLI" checked/);
+    expect(failing.stdout).toContain('worst: LG101 error (cli.json SP-CLI)');
+    expect(failing.stdout).toMatch(/http:\/\/ligament\.test\/submittals\/\d+/);
+    const lenient = await runSubmit({ ...base, failOn: 'none', files }, (url, init) => fetch(url, init));
+    expect(lenient.exitCode).toBe(0);
+    const invalid = await runSubmit(
+      { ...base, failOn: 'none', files: [{ name: 'bad.json', text: '{' }] },
+      (url, init) => fetch(url, init),
+    );
+    expect(invalid.exitCode).toBe(2);
+    expect(invalid.stderr).toContain('bad.json:1:');
+    const wrong = await runSubmit({ ...base, token: 'lgt_wrong', failOn: 'none', files }, (url, init) =>
+      fetch(url, init),
+    );
+    expect(wrong).toMatchObject({ exitCode: 2, stderr: expect.stringContaining('401') });
+  });
+
   it('stops working once revoked', async () => {
     const res = await request(t.http).delete(`/api/tokens/${tokenId}`).set(bearer(consultant));
     expect(res.body.revokedAt).toEqual(expect.any(String));
