@@ -148,6 +148,36 @@ try {
     `  1000 files (${full.holes} holes, up to ${full.max} per member): ${full.ms.toFixed(0)} ms (target ≤ 3000 ms) ${full.ms <= 3000 ? 'met' : 'NOT met'}, peak RSS ${full.rssMb.toFixed(1)} MB`,
   );
   say(`  peak RSS growth 250 → 1000 files: ${(full.rssMb - small.rssMb).toFixed(1)} MB`);
+
+  // What a run keeps: the heap after a full GC with the run's reports still held, in-process.
+  const retainScript = join(work, 'retain.mjs');
+  writeFileSync(
+    retainScript,
+    [
+      `const { runCheck } = await import(${JSON.stringify(join(root, 'dist', 'runner', 'check.js'))});`,
+      `const { readSources } = await import(${JSON.stringify(join(root, 'dist', 'node', 'sources.js'))});`,
+      `const { DEFAULT_TOLERANCE } = await import(${JSON.stringify(join(root, 'dist', 'runner', 'tolerance.js'))});`,
+      'const held = [];',
+      'for (const dir of process.argv.slice(2)) {',
+      '  globalThis.gc(); const before = process.memoryUsage().heapUsed;',
+      "  held.push(await runCheck(readSources([dir], { cwd: dir, readStdin: async () => '' }), { command: 'check', settings: { tolerance: DEFAULT_TOLERANCE, failOn: 'none', k: 10 }, version: '0', keepDetail: false }));",
+      '  globalThis.gc(); console.log((process.memoryUsage().heapUsed - before) / 1048576);',
+      '}',
+    ].join('\n'),
+  );
+  const retained = spawnSync(
+    process.execPath,
+    ['--expose-gc', retainScript, join(work, 'calcs-250'), join(work, 'calcs-1000')],
+    {
+      encoding: 'utf8',
+    },
+  )
+    .stdout.trim()
+    .split('\n')
+    .map(Number);
+  say(
+    `  heap kept by the reports (after GC): 250 files ${retained[0]?.toFixed(1)} MB (first run, with the modules it loads), then 1000 files ${retained[1]?.toFixed(1)} MB (${(((retained[1] ?? 0) * 1024) / 1000).toFixed(1)} kB per file)`,
+  );
   if (asJson) {
     console.log(
       JSON.stringify({
@@ -155,6 +185,7 @@ try {
         coldStart: { bareMedianMs: median(bare), helpMedianMs: median(help), ratio, target: 1.25 },
         check1000: { wallMs: full.ms, peakRssMb: full.rssMb, holes: full.holes, targetMs: 3000 },
         check250: { wallMs: small.ms, peakRssMb: small.rssMb, holes: small.holes },
+        retainedHeapMb: { files250: retained[0], files1000: retained[1] },
       }),
     );
   }
