@@ -1,0 +1,70 @@
+import { checkFiles } from './check-files.js';
+
+const rules = { allowedExtensions: ['.json'] };
+
+function plate(id: string, claimedAn?: number): Buffer {
+  return Buffer.from(
+    JSON.stringify({
+      $schema: 'urn:ligament:schema:calc:1.0',
+      format: 'ligament-calc',
+      formatVersion: '1.0',
+      meta: { project: 'Harbour Lantern Footbridge', preparedBy: 'Priya Halvorsen', date: '2026-11-20' },
+      units: 'in',
+      code: { standard: 'AISC 360-22', method: 'LRFD' },
+      members: [
+        {
+          id,
+          kind: 'plate',
+          width: 12,
+          thickness: '1/2',
+          material: { grade: 'A36', Fy: 36, Fu: 58 },
+          holes: [
+            { id: 'A1', x: 0, y: 3, bolt: '3/4' },
+            { id: 'B1', x: 0, y: 9, bolt: '3/4' },
+          ],
+          load: { directions: ['-x'], U: 1.0 },
+          ...(claimedAn !== undefined ? { claims: { An: claimedAn } } : {}),
+        },
+      ],
+    }),
+  );
+}
+
+describe('checkFiles', () => {
+  it('recomputes every member of valid files', () => {
+    const out = checkFiles([{ name: 'a.json', content: plate('P-1') }], rules);
+    expect(out.ok).toBe(true);
+    if (!out.ok) return;
+    // Two 3/4 in bolts in standard holes: 13/16 + 1/16 = 7/8 in each (AISC 360-22 Table J3.3 and
+    // B4.3b); wn = 12 − 2 × 0.875 = 10.25 in, An = 10.25 × 0.5 = 5.125 in² (hand calculation).
+    expect(out.files[0]?.audit.members[0]?.result.An).toBeCloseTo(5.125, 9);
+    expect(out.files[0]?.sha256).toMatch(/^[0-9a-f]{64}$/);
+  });
+
+  it('flags a claim above the recomputed net area as overstated', () => {
+    const out = checkFiles([{ name: 'a.json', content: plate('P-1', 6.0) }], rules);
+    expect(out.ok && out.files[0]?.audit.members[0]?.findings.map((f) => f.code)).toEqual(['LG101']);
+  });
+
+  it('reports every problem of every file and recomputes nothing when any file is bad', () => {
+    const out = checkFiles(
+      [
+        { name: 'a.txt', content: plate('P-1') },
+        { name: 'b.json', content: Buffer.from('{') },
+        { name: 'c.json', content: plate('P-3') },
+        { name: 'c.json', content: plate('P-4') },
+        { name: 'd.json', content: Buffer.from([0x7b, 0xff, 0xfe, 0x7d]) },
+      ],
+      rules,
+    );
+    expect(out.ok).toBe(false);
+    if (out.ok) return;
+    expect(out.invalidFiles).toBe(4);
+    expect(out.errors.map((e) => [e.file, e.rule])).toEqual([
+      ['a.txt', 'file-extension'],
+      ['b.json', 'json-syntax'],
+      ['c.json', 'duplicate-file-name'],
+      ['d.json', 'encoding'],
+    ]);
+  });
+});
