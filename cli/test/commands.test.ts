@@ -36,6 +36,12 @@ describe('ligament chains', () => {
     expect(doc.directions[0]!.governing.netWidth).toBeCloseTo(152, 6);
   });
 
+  it('--direction takes a value that starts with a dash (-x)', async () => {
+    const r = await run(['chains', ex('north-splice-correct.json'), '--direction', '-x', '--format', 'json']);
+    const doc = JSON.parse(r.stdout) as { directions: { direction: string }[] };
+    expect(doc.directions.map((d) => d.direction)).toEqual(['-x']);
+  });
+
   it('an unknown member is exit 2 naming the members there are; an invalid file is exit 2 with its errors', async () => {
     const r = await run(['chains', ex('north-splice-correct.json'), '--member', 'X9']);
     expect(r.exitCode).toBe(2);
