@@ -124,11 +124,6 @@ export function buildDrawing(member: MemberInput, result: MemberResult, options:
     const highest = Math.max(...onLine.map((h) => h.y));
     shapes.push({ kind: 'line', from: [X(x), Y(highest) - 4], to: [X(x), pitchAt + 2], stroke: 'centre' });
   }
-  // Extension lines for the plate edges to the gauge and width strings.
-  for (const y of [0, W]) {
-    shapes.push({ kind: 'line', from: [right + 1.5, Y(y)], to: [widthAt + 2, Y(y)], stroke: 'extension' });
-  }
-
   // Holes at their nominal size.
   for (const h of holes) {
     const w = widths.get(h.id);
@@ -147,7 +142,12 @@ export function buildDrawing(member: MemberInput, result: MemberResult, options:
   for (let i = 0; i + 1 < stops.length; i += 1) {
     shapes.push(verticalDimension(stops[i]!, stops[i + 1]!, gaugeAt, Y, units, 'gauge'));
   }
-  shapes.push(verticalDimension(0, W, widthAt, Y, units, 'width'));
+  // The overall width carries the extension lines of the plate edges (the gauge string shares them);
+  // hole centre lines run out to the strings and serve as their own extension lines.
+  shapes.push({
+    ...verticalDimension(0, W, widthAt, Y, units, 'width'),
+    extensions: [0, W].map((y) => ({ from: [right + 1.5, Y(y)] as Point, to: [widthAt + 2, Y(y)] as Point })),
+  });
   // Pitch string between hole rows.
   for (let i = 0; i + 1 < pitchXs.length; i += 1) {
     shapes.push(horizontalDimension(pitchXs[i]!, pitchXs[i + 1]!, pitchAt, X, units));

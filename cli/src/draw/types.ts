@@ -112,6 +112,10 @@ export interface DimensionShape {
   readonly measure: 'gauge' | 'pitch' | 'width';
   /** The real distance, in the member's units. */
   readonly value: number;
+  /**
+   * Extension lines drawn for this dimension. Where a hole's centre line runs out to the dimension
+   * line it is the extension line (drawn once, as a centre line), so this list can be empty.
+   */
   readonly extensions: readonly Segment[];
   readonly line: Segment;
   readonly ticks: readonly Segment[];
