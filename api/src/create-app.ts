@@ -41,7 +41,8 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
     abortOnError: false,
   });
   app.setGlobalPrefix('api');
-  app.use(helmet());
+  // The demo is served over plain http://localhost: keep helmet's CSP but without upgrade-insecure-requests.
+  app.use(helmet({ contentSecurityPolicy: { directives: { upgradeInsecureRequests: null } } }));
   app.set('query parser', 'extended');
   app.useGlobalPipes(createValidationPipe());
   app.useGlobalFilters(new HttpErrorFilter());
