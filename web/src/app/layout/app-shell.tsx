@@ -82,7 +82,7 @@ const useStyles = makeStyles({
     fontWeight: tokens.fontWeightSemibold,
     ...shorthands.borderBottom('3px', 'solid', tokens.colorPaletteMarigoldBorderActive),
   },
-  tools: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
+  tools: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS, marginLeft: 'auto' },
   onBrandButton: {
     color: tokens.colorNeutralForegroundOnBrand,
     ':hover': { color: tokens.colorNeutralForeground1 },
@@ -128,7 +128,7 @@ export function AppShell() {
       </a>
       <header className={styles.header}>
         <NavLink to={paths.home.getHref()} className={styles.brand} aria-label="Ligament home">
-          <LogoMark size={30} />
+          <LogoMark size={30} onBrand />
           <span className={styles.wordmark}>Ligament</span>
         </NavLink>
         <nav aria-label="Main" className={styles.nav}>

@@ -62,7 +62,7 @@ export function Component() {
     <div className={styles.page}>
       <aside className={styles.aside}>
         <div className={styles.brand}>
-          <LogoMark size={48} />
+          <LogoMark size={48} onBrand />
           <span className={styles.wordmark}>Ligament</span>
         </div>
         <Text className={styles.pitch}>

@@ -53,7 +53,7 @@ export function TrendChart({ trend }: TrendChartProps) {
           />
           <Legend />
           <Line
-            type="monotone"
+            type="linear"
             dataKey="raised"
             name="Raised"
             stroke={tokens.colorNeutralForeground3}
@@ -62,7 +62,7 @@ export function TrendChart({ trend }: TrendChartProps) {
             isAnimationActive={false}
           />
           <Line
-            type="monotone"
+            type="linear"
             dataKey="open"
             name="Still open"
             stroke={tokens.colorBrandForeground1}

@@ -68,7 +68,7 @@ export function DiscrepancyFilters({ values, onChange, onClear }: DiscrepancyFil
       <MultiSelect
         label="Status"
         options={['open', ...STATUSES]}
-        labels={{ open: 'Open (raised, answered, returned)', ...statusLabels }}
+        labels={{ open: 'Open', ...statusLabels }}
         selected={values.status}
         onChange={(status) => onChange({ status })}
       />

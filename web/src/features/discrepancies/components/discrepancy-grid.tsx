@@ -25,7 +25,7 @@ type Row = Schema<'DiscrepancyDto'>;
 
 const useStyles = makeStyles({
   wrap: { overflowX: 'auto' },
-  grid: { minWidth: '860px' },
+  grid: { minWidth: '760px' },
   code: { fontFamily: tokens.fontFamilyMonospace, fontWeight: tokens.fontWeightSemibold },
   message: {
     overflow: 'hidden',
@@ -35,6 +35,10 @@ const useStyles = makeStyles({
     WebkitBoxOrient: 'vertical',
   },
   active: { backgroundColor: tokens.colorBrandBackground2 },
+  narrow: { flexGrow: 0, flexShrink: 0, flexBasis: '96px' },
+  medium: { flexGrow: 0, flexShrink: 0, flexBasis: '128px' },
+  wide: { flexGrow: 3, flexShrink: 1, flexBasis: '0px', minWidth: '200px' },
+  sub: { display: 'block', color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase100 },
 });
 
 const noCompare = () => 0;
@@ -134,6 +138,12 @@ export function DiscrepancyGrid({
     }),
   ];
   const sortable = new Set(['code', 'severity', 'class', 'memberId', 'fileName', 'status', 'updatedAt']);
+  const sizeOf = (columnId: TableColumnId) =>
+    columnId === 'message'
+      ? styles.wide
+      : columnId === 'class' || columnId === 'memberId'
+        ? styles.medium
+        : styles.narrow;
 
   return (
     <div className={styles.wrap}>
@@ -169,7 +179,9 @@ export function DiscrepancyGrid({
                 : undefined
             }
           >
-            {({ renderHeaderCell }) => <DataGridHeaderCell>{renderHeaderCell()}</DataGridHeaderCell>}
+            {({ renderHeaderCell, columnId }) => (
+              <DataGridHeaderCell className={sizeOf(columnId)}>{renderHeaderCell()}</DataGridHeaderCell>
+            )}
           </DataGridRow>
         </DataGridHeader>
         <DataGridBody<Row>>
@@ -184,7 +196,9 @@ export function DiscrepancyGrid({
               }
               data-testid="discrepancy-row"
             >
-              {({ renderCell }) => <DataGridCell>{renderCell(item)}</DataGridCell>}
+              {({ renderCell, columnId }) => (
+                <DataGridCell className={sizeOf(columnId)}>{renderCell(item)}</DataGridCell>
+              )}
             </DataGridRow>
           )}
         </DataGridBody>

@@ -1,6 +1,6 @@
 import { Button, Dropdown, Field, makeStyles, Option, Text, tokens } from '@fluentui/react-components';
 import { ChevronLeftRegular, ChevronRightRegular, DocumentBulletListRegular } from '@fluentui/react-icons';
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
@@ -54,6 +54,12 @@ export function Component() {
   const projects = useDiscrepancyProjects();
   const [selected, setSelected] = useState<Set<number>>(new Set());
   const [activeId, setActiveId] = useState<number | null>(null);
+  const detailRef = useRef<HTMLDivElement>(null);
+  // Below the two-column width the detail panel sits under the grid: bring it into view.
+  useEffect(() => {
+    if (activeId !== null && window.innerWidth < 1180)
+      detailRef.current?.scrollIntoView({ block: 'start', behavior: 'smooth' });
+  }, [activeId]);
 
   const projectId = params.get('projectId') ? Number(params.get('projectId')) : projects.data?.[0]?.id;
   const sortParam = params.get('sort') as DiscrepancyFilters['sort'] | null;
@@ -223,7 +229,7 @@ export function Component() {
             </>
           )}
         </Section>
-        <div className={styles.detail}>
+        <div className={styles.detail} ref={detailRef}>
           <Section>
             {activeId !== null && projectId !== undefined ? (
               <DiscrepancyDetail

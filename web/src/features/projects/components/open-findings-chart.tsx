@@ -54,7 +54,11 @@ export function OpenFindingsChart({ revisions, summary }: OpenFindingsChartProps
             }}
             labelStyle={{ color: tokens.colorNeutralForeground1, fontWeight: 600 }}
           />
-          <Legend wrapperStyle={{ color: tokens.colorNeutralForeground2 }} />
+          <Legend
+            formatter={(value: string) => (
+              <span style={{ color: tokens.colorNeutralForeground2 }}>{value}</span>
+            )}
+          />
           {present.map((c) => (
             <Bar
               key={c}

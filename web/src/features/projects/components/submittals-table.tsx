@@ -18,6 +18,8 @@ import { formatDateTime } from '@/lib/format';
 
 const useStyles = makeStyles({
   wrap: { overflowX: 'auto' },
+  table: { tableLayout: 'auto' },
+  badge: { whiteSpace: 'nowrap' },
   num: { textAlign: 'right', fontVariantNumeric: 'tabular-nums' },
   title: { fontWeight: tokens.fontWeightSemibold },
   sub: { display: 'block', color: tokens.colorNeutralForeground3 },
@@ -39,7 +41,7 @@ export function SubmittalsTable({ submittals }: SubmittalsTableProps) {
   const styles = useStyles();
   return (
     <div className={styles.wrap}>
-      <Table aria-label="Submittals and revisions">
+      <Table aria-label="Submittals and revisions" className={styles.table}>
         <TableHeader>
           <TableRow>
             <TableHeaderCell>Submittal</TableHeaderCell>
@@ -82,7 +84,12 @@ export function SubmittalsTable({ submittals }: SubmittalsTableProps) {
                     {stampLabels[s.stamp.action] ?? s.stamp.action}
                   </Badge>
                 ) : (
-                  <Badge appearance="outline" color="informative" icon={<ClockRegular />}>
+                  <Badge
+                    className={styles.badge}
+                    appearance="outline"
+                    color="informative"
+                    icon={<ClockRegular />}
+                  >
                     Awaiting stamp
                   </Badge>
                 )}

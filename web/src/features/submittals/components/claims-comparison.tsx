@@ -15,7 +15,8 @@ import type { UnitSystem } from 'ligament/engine';
 import { chainLabel, formatQuantity, unitLabels, type UnitLabels } from '@/lib/units';
 
 const useStyles = makeStyles({
-  num: { textAlign: 'right', fontVariantNumeric: 'tabular-nums' },
+  table: { tableLayout: 'auto' },
+  num: { textAlign: 'right', fontVariantNumeric: 'tabular-nums', whiteSpace: 'nowrap' },
   over: { color: tokens.colorPaletteRedForeground1, fontWeight: tokens.fontWeightSemibold },
   under: { color: tokens.colorPaletteDarkOrangeForeground1 },
   same: { color: tokens.colorPaletteGreenForeground1 },
@@ -104,7 +105,7 @@ export function ClaimsComparison({ claims, recomputed, units, tolerance = 0.005 
 
   return (
     <div>
-      <Table size="small" aria-label="Claimed against recomputed">
+      <Table size="small" aria-label="Claimed against recomputed" className={styles.table}>
         <TableHeader>
           <TableRow>
             <TableHeaderCell>Quantity</TableHeaderCell>

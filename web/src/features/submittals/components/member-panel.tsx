@@ -15,7 +15,7 @@ import { MemberDrawing, type DrawnChain } from './member-drawing';
 const useStyles = makeStyles({
   top: {
     display: 'grid',
-    gridTemplateColumns: 'minmax(0, 3fr) minmax(0, 2fr)',
+    gridTemplateColumns: 'minmax(0, 1fr) minmax(0, 1fr)',
     gap: tokens.spacingHorizontalL,
     alignItems: 'start',
     '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' },

@@ -1,0 +1,51 @@
+import { fireEvent, screen, within } from '@testing-library/react';
+import { loadCalcText } from 'ligament/calc';
+import { analyseMember } from 'ligament/engine';
+import { describe, expect, it } from 'vitest';
+import { readFixture } from '@/testing/fixtures';
+import { renderWithProviders } from '@/testing/render';
+import { MemberPanel } from './member-panel';
+
+// The demo's splice plate (fictional): claims the straight chain A1–A2 while the zigzag A1–B1–A2 governs.
+const text = readFixture('splice-plates.json');
+
+function splicePlate() {
+  const loaded = loadCalcText(text, 'splice-plates.json');
+  if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('; '));
+  const member = loaded.document.members[0]!;
+  const result = analyseMember(member.input, loaded.document.profile, { k: 5 });
+  return { document: loaded.document, member, result };
+}
+
+describe('MemberPanel', () => {
+  it('draws the plate with one outline per hole and the governing fracture line', () => {
+    const { document, member, result } = splicePlate();
+    renderWithProviders(<MemberPanel document={document} member={member} result={result} findings={[]} />);
+    const drawing = screen.getByTestId('member-drawing');
+    expect(drawing.querySelectorAll('[data-hole]')).toHaveLength(3);
+    expect(drawing.querySelector('[data-fracture]')?.getAttribute('data-chain')).toBe('A1 B1 A2');
+  });
+
+  it('hovering a chain row traces that chain on the drawing, and leaving clears it', () => {
+    const { document, member, result } = splicePlate();
+    renderWithProviders(<MemberPanel document={document} member={member} result={result} findings={[]} />);
+    const straight = screen.getByRole('row', { name: /^Chain A1 – A2,/ });
+    fireEvent.mouseEnter(straight);
+    const drawing = screen.getByTestId('member-drawing');
+    expect(drawing.querySelector('[data-highlighted-chain]')?.getAttribute('data-highlighted-chain')).toBe(
+      'A1 A2',
+    );
+    fireEvent.mouseLeave(straight);
+    expect(drawing.querySelector('[data-highlighted-chain]')).toBeNull();
+  });
+
+  it('marks the overstated net area in words, not colour alone', () => {
+    const { document, member, result } = splicePlate();
+    renderWithProviders(<MemberPanel document={document} member={member} result={result} findings={[]} />);
+    const table = screen.getByRole('table', { name: 'Claimed against recomputed' });
+    const netRow = within(table).getByRole('row', { name: /Net area An/ });
+    expect(netRow).toHaveTextContent(/overstated by \d+\.\d %/);
+    expect(within(table).getByRole('row', { name: /Gross area Ag/ })).toHaveTextContent('agrees');
+    expect(within(table).getByRole('row', { name: /Controlling chain/ })).toHaveTextContent('differs');
+  });
+});
