@@ -1,5 +1,5 @@
 import { parseTree, getNodeValue, type Node, type ParseError } from 'jsonc-parser';
-import { EngineError, holeWidth, inspectLayout } from '../engine/index.js';
+import { EngineError, inspectLayout, memberHoleWidth } from '../engine/index.js';
 import { normaliseDocument } from './normalise.js';
 import { lineIndex, nodeAtPointer, escapeSegment } from './positions.js';
 import type { CalcError, LoadResult, SourcePosition } from './types.js';
@@ -158,7 +158,7 @@ export function loadCalcText(text: string, fileName: string): LoadResult {
     m.holes.forEach((hole, i) => {
       if (hole.dimension) return;
       try {
-        holeWidth(hole, document.profile);
+        memberHoleWidth(hole, document.profile);
       } catch (err) {
         if (!(err instanceof EngineError)) throw err;
         sizesKnown = false;
@@ -175,7 +175,10 @@ export function loadCalcText(text: string, fileName: string): LoadResult {
       }
     });
     if (!sizesKnown) continue;
-    for (const f of inspectLayout(m, document.profile)) {
+    // A section's holes were placed by element and gauge above (hole-outside-element); of the plate's
+    // layout rules only unique ids apply.
+    const layoutIssues = inspectLayout(m, document.profile).filter((f) => !m.section || f.code === 'LG303');
+    for (const f of layoutIssues) {
       const pointer = `/members/${member.index}${f.pointer}`;
       errors.push(at(file, locate(pointer), pointer, f.name, `${pointer}: ${f.message} (rule ${f.name})`));
     }

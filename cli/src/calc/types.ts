@@ -37,6 +37,13 @@ export interface MemberClaims {
   readonly rupture?: number;
   /** Governing available strength. */
   readonly available?: number;
+  /** Block shear: gross and net shear areas, gross and net tension areas of the governing tear-out. */
+  readonly Agv?: number;
+  readonly Anv?: number;
+  readonly Agt?: number;
+  readonly Ant?: number;
+  /** Available block shear strength (φRn, Rn/Ω, Veff,Rd or Tr). */
+  readonly blockShear?: number;
 }
 
 export interface CalcMember {

@@ -1,12 +1,24 @@
-import { holeWidth } from './holeWidth.js';
+import { EngineError } from './engineError.js';
 import { leastChains } from './leastChains.js';
+import { memberBlockShear } from './memberBlockShear.js';
+import { memberHoleWidth } from './memberHoleWidth.js';
 import { memberLayout } from './memberLayout.js';
+import { memberSection } from './memberSection.js';
+import { memberShearLag } from './memberShearLag.js';
+import type { ProfileStrength } from './profiles/types.js';
+import { analyseSection } from './sections/analyseSection.js';
+import type { SectionChain, SectionLayout } from './sections/types.js';
 import { shareCheck } from './shareCheck.js';
+import { tensionProfileOf } from './tensionProfileOf.js';
 import type {
   AnalyseOptions,
+  Chain,
   CodeProfile,
   DirectionResult,
+  HoleWidth,
   LimitState,
+  LoadDirection,
+  MemberGrossArea,
   MemberInput,
   MemberResult,
   Strength,
@@ -30,11 +42,64 @@ function strength(limitState: LimitState, nominal: number, profile: CodeProfile)
 }
 
 /**
+ * A section chain in the plate chain's shape: deducted and staggerSum are widths (Σ hole widths,
+ * Σ s²/4g), netArea the section's, and netWidth = netArea / (pieces · member thickness), the width of
+ * a flat plate of the member's (first element's) thickness with the same net area.
+ */
+export function sectionChainAsChain(chain: SectionChain, thickness: number, pieces: number): Chain {
+  return {
+    holes: chain.holes,
+    legs: chain.legs.map((l) => ({ from: l.from, to: l.to, s: l.s, g: l.g, term: l.term })),
+    deducted: chain.deductedArea / (pieces * thickness),
+    staggerSum: chain.legs.reduce((sum, l) => sum + l.term, 0),
+    netWidth: chain.netArea / (pieces * thickness),
+    netArea: chain.netArea,
+  };
+}
+
+/** The unfolded section of a section member, with its holes' deducted widths. */
+export function memberSectionLayout(
+  member: MemberInput,
+  holeWidths: readonly HoleWidth[],
+  directions: readonly LoadDirection[],
+  k: number,
+) {
+  const spec = member.section!;
+  const section = memberSection(spec);
+  const holes = member.holes.map((h, i) => {
+    if (h.element === undefined || h.gauge === undefined) {
+      throw new EngineError(
+        'invalid-argument',
+        `hole ${h.id}: a section member's holes need element and gauge`,
+      );
+    }
+    return { id: h.id, element: h.element, x: h.x, gauge: h.gauge, deducted: holeWidths[i]!.deducted };
+  });
+  return analyseSection(section, holes, {
+    directions,
+    k,
+    ...(spec.tabulatedAg !== undefined ? { tabulatedAg: spec.tabulatedAg } : {}),
+  });
+}
+
+function fromProfile(s: ProfileStrength): Strength {
+  return { limitState: s.limitState, nominal: s.nominal, factor: s.factor, available: s.available };
+}
+
+/**
  * Net section and tensile strength of a member for each load direction (DOMAIN §3–5, AISC 360 D2,
  * D3, J4.1): Ag = width·t; per direction the least chain that can form under the full load, its k
  * least companions and the equal-share check; An = min over directions of min(governing net area, Ag);
  * Ae = An·U (U = 1.0 by default, Table D3.1 case 1), capped at 0.85 Ag for splice plates and gussets
  * (J4.1(b)); yielding Pn = Fy·Ag, rupture Pn = Fu·Ae; in `mm` MPa·mm² = N, reported in kN.
+ *
+ * Members with a `section` (angles, tees, W-shapes, channels) are unfolded and searched as connected
+ * flat elements (sections/README.md); Ag is the tabulated value when given. U comes from
+ * {@link memberShearLag}. Under EN 1993-1-1 and CSA S16-19 hole widths, net area rule and strengths
+ * come from the code's profile (EN: Npl,Rd = A fy/γM0, Nu,Rd = 0.9 Anet fu/γM2 or 3.10.3 for angles;
+ * CSA: Tr = φ Ag Fy, φu Ane Fu); the 0.85 Ag cap is AISC 360 J4.1's and applies only there. With
+ * block-shear input the governing tear-out is reported beside the tensile strengths
+ * ({@link memberBlockShear}); it does not replace `governing`.
  *
  * @param member - the member (width, thickness, material, holes, directions, U, required strength)
  * @param profile - code edition, design method and unit system
@@ -55,20 +120,39 @@ export function analyseMember(
 ): MemberResult {
   const k = options.k ?? 10;
   const directions = options.directions ?? member.directions;
-  const holeWidths = member.holes.map((h) => holeWidth(h, profile));
-  const layout = memberLayout(member, profile, holeWidths);
-  const Ag = member.width * member.thickness;
-  const results: DirectionResult[] = directions.map((direction) => {
-    const least = leastChains(layout, direction, k);
-    const governing = least[0] ?? null;
-    return {
-      direction,
-      governing,
-      leastChains: least,
-      An: governing ? Math.min(governing.netArea, Ag) : Ag,
-      share: shareCheck(layout, direction),
-    };
-  });
+  const holeWidths = member.holes.map((h) => memberHoleWidth(h, profile));
+  let Ag: number;
+  let results: DirectionResult[];
+  let grossArea: MemberGrossArea | undefined;
+  let sectionLayout: SectionLayout | undefined;
+  if (member.section) {
+    const s = memberSectionLayout(member, holeWidths, directions, k);
+    sectionLayout = s.layout;
+    grossArea = s.grossArea;
+    Ag = s.grossArea.used;
+    const pieces = s.layout.section.pieces;
+    results = s.directions.map((d) => ({
+      direction: d.direction,
+      governing: d.governing ? sectionChainAsChain(d.governing, member.thickness, pieces) : null,
+      leastChains: d.leastChains.map((c) => sectionChainAsChain(c, member.thickness, pieces)),
+      An: d.An,
+      share: null,
+    }));
+  } else {
+    const layout = memberLayout(member, profile, holeWidths);
+    Ag = member.width * member.thickness;
+    results = directions.map((direction) => {
+      const least = leastChains(layout, direction, k);
+      const governing = least[0] ?? null;
+      return {
+        direction,
+        governing,
+        leastChains: least,
+        An: governing ? Math.min(governing.netArea, Ag) : Ag,
+        share: shareCheck(layout, direction),
+      };
+    });
+  }
   let governingDirection = directions[0] ?? '-x';
   let An = Ag;
   for (const d of results) {
@@ -77,15 +161,43 @@ export function analyseMember(
       governingDirection = d.direction;
     }
   }
-  const U = member.U ?? 1.0;
+  const shearLag = memberShearLag(member, profile, An, sectionLayout);
+  const U = shearLag?.U ?? 1.0;
   const uncapped = An * U;
-  const cap = member.kind === 'plate' ? Number.POSITIVE_INFINITY : 0.85 * Ag;
+  const tension = tensionProfileOf(profile);
+  const cap =
+    !tension && (member.kind === 'splice-plate' || member.kind === 'gusset')
+      ? 0.85 * Ag
+      : Number.POSITIVE_INFINITY;
   const Ae = Math.min(uncapped, cap);
   const toForce = profile.units === 'mm' ? 1 / 1000 : 1;
-  const yielding = strength('yielding', member.material.Fy * Ag * toForce, profile);
-  const rupture = strength('rupture', member.material.Fu * Ae * toForce, profile);
+  let yielding: Strength;
+  let rupture: Strength;
+  let clauses: MemberResult['clauses'];
+  if (tension) {
+    // EN 6.2.3 (6.7) carries its own 0.9; a 3.10.3 angle (or a given U) passes Ae instead.
+    const reduced = shearLag !== undefined && shearLag.rule !== 'EN 1993-1-1 6.2.3';
+    const r = tension.tensionResistance({
+      Ag,
+      An,
+      ...(reduced || profile.standard === 'CSA S16-19' ? { Ae } : {}),
+      Fy: member.material.Fy,
+      Fu: member.material.Fu,
+    });
+    yielding = fromProfile(r.yielding);
+    rupture = fromProfile(r.rupture);
+    clauses = { yielding: r.yielding.clause, rupture: r.rupture.clause };
+  } else {
+    yielding = strength('yielding', member.material.Fy * Ag * toForce, profile);
+    rupture = strength('rupture', member.material.Fu * Ae * toForce, profile);
+  }
   const governing = rupture.available < yielding.available ? rupture : yielding;
+  const block = memberBlockShear(member, profile, holeWidths, directions, sectionLayout);
   const result: MemberResult = {
+    ...(grossArea ? { grossArea } : {}),
+    ...(shearLag ? { shearLag } : {}),
+    ...(block ? { blockShear: block } : {}),
+    ...(clauses ? { clauses } : {}),
     memberId: member.id,
     Ag,
     holeWidths,

@@ -1,14 +1,13 @@
 import type { AuditOptions, CalcMember, ClaimedChain, MemberAudit, MemberClaims } from '../calc/types.js';
 import { analyseMember } from './analyseMember.js';
-import { chainDefect } from './chainDefect.js';
-import { chainOf } from './chainOf.js';
-import { chainRejection } from './chainRejection.js';
 import { detailingFindings } from './detailingFindings.js';
 import { formatDirection } from './formatDirection.js';
 import { formatQuantity, type Dimension } from './formatQuantity.js';
 import { inspectLayout } from './inspectLayout.js';
 import { makeFinding } from './makeFinding.js';
-import { memberLayout } from './memberLayout.js';
+import { memberChainTools } from './memberChainTools.js';
+import { profileDetailingFindings } from './profileDetailingFindings.js';
+import { sectionDetailingFindings } from './sectionDetailingFindings.js';
 import { withinTolerance, DEFAULT_TOLERANCE } from './withinTolerance.js';
 import type { Chain, CodeProfile, Finding, FindingClass, LoadDirection, MemberResult } from './types.js';
 
@@ -28,6 +27,11 @@ const SCALARS: readonly {
   { key: 'yielding', codes: ['LG103', 'LG113'], dimension: 'force', label: 'yielding strength' },
   { key: 'rupture', codes: ['LG103', 'LG113'], dimension: 'force', label: 'rupture strength' },
   { key: 'available', codes: ['LG103', 'LG113'], dimension: 'force', label: 'available strength' },
+  { key: 'Agv', codes: ['LG107', 'LG117'], dimension: 'area', label: 'block shear Agv' },
+  { key: 'Anv', codes: ['LG107', 'LG117'], dimension: 'area', label: 'block shear Anv' },
+  { key: 'Agt', codes: ['LG107', 'LG117'], dimension: 'area', label: 'block shear Agt' },
+  { key: 'Ant', codes: ['LG107', 'LG117'], dimension: 'area', label: 'block shear Ant' },
+  { key: 'blockShear', codes: ['LG106', 'LG116'], dimension: 'force', label: 'block shear strength' },
 ];
 
 const CLASS_ORDER: readonly FindingClass[] = [
@@ -46,8 +50,15 @@ function percent(claimed: number, recomputed: number): string {
   return ` by ${((Math.abs(claimed - recomputed) / Math.abs(recomputed)) * 100).toFixed(1)} %`;
 }
 
-function recomputedScalar(key: ScalarClaim, result: MemberResult): number {
+function recomputedScalar(key: ScalarClaim, result: MemberResult): number | undefined {
   switch (key) {
+    case 'Agv':
+    case 'Anv':
+    case 'Agt':
+    case 'Ant':
+      return result.blockShear?.[key];
+    case 'blockShear':
+      return result.blockShear?.available;
     case 'Ag':
       return result.Ag;
     case 'An':
@@ -61,7 +72,7 @@ function recomputedScalar(key: ScalarClaim, result: MemberResult): number {
     case 'rupture':
       return result.rupture.available;
     case 'available':
-      return result.governing.available;
+      return Math.min(result.governing.available, result.blockShear?.available ?? Number.POSITIVE_INFINITY);
   }
 }
 
@@ -70,6 +81,9 @@ function sameHoles(a: readonly string[], b: readonly string[]): boolean {
 }
 
 function context(result: MemberResult, key: ScalarClaim): string {
+  if (key === 'available' && result.blockShear && result.blockShear.available < result.governing.available) {
+    return ` (block shear governs, ${result.blockShear.clause})`;
+  }
   if (key !== 'An' && key !== 'Ae' && key !== 'rupture' && key !== 'available') return '';
   const d = result.directions.find((r) => r.direction === result.governingDirection);
   if (!d?.governing || d.An >= result.Ag) return '';
@@ -109,11 +123,13 @@ export function auditMember(
     ...(options.directions ? { directions: options.directions } : {}),
   });
   const directions = result.directions.map((d) => d.direction);
-  const layout = memberLayout(member, profile, result.holeWidths);
+  const tools = memberChainTools(member, profile, result.holeWidths);
   const findings: Finding[] = [];
   const at = { memberId: member.id };
 
-  for (const issue of inspectLayout(member, profile)) {
+  // A section's holes are placed by element and gauge; the loader reports those outside (LG304).
+  const issues = inspectLayout(member, profile).filter((i) => !member.section || i.code === 'LG303');
+  for (const issue of issues) {
     findings.push(
       makeFinding(issue.code, {
         ...at,
@@ -129,6 +145,7 @@ export function auditMember(
     const claimed = claims[key];
     if (claimed === undefined) continue;
     const recomputed = recomputedScalar(key, result);
+    if (recomputed === undefined) continue;
     if (withinTolerance(claimed, recomputed, dimension, tolerance)) continue;
     const over = claimed > recomputed;
     findings.push(
@@ -153,7 +170,7 @@ export function auditMember(
   const admissibleClaims: { chain: Chain; directions: readonly LoadDirection[]; claimed: ClaimedChain }[] =
     [];
   const checkChain = (claimed: ClaimedChain, pointer: string, controllingClaim: boolean): Chain | null => {
-    const defect = chainDefect(layout, claimed.holes);
+    const defect = tools.defect(claimed.holes);
     if (defect) {
       findings.push(
         makeFinding('LG123', {
@@ -166,9 +183,9 @@ export function auditMember(
       );
       return null;
     }
-    const chain = chainOf(layout, claimed.holes);
+    const chain = tools.of(claimed.holes);
     const judged = claimed.direction ? [claimed.direction] : directions;
-    const rejections = judged.map((d) => chainRejection(chain, layout, d));
+    const rejections = judged.map((d) => tools.rejection(chain, d));
     const admissible = judged.filter((_, i) => rejections[i] === null);
     if (admissible.length === 0 && judged.length > 0) {
       const why = rejections
@@ -221,15 +238,14 @@ export function auditMember(
     const pointer = `${base}/claims/controllingChain`;
     const before = findings.length;
     const chain = listed
-      ? chainDefect(layout, controlling.holes)
+      ? tools.defect(controlling.holes)
         ? null
-        : chainOf(layout, controlling.holes)
+        : tools.of(controlling.holes)
       : checkChain(controlling, pointer, true);
     const rejected = findings.slice(before).some((f) => f.code === 'LG122' || f.code === 'LG123');
     const ownDirection = controlling.direction;
     const d = result.directions.find((r) => r.direction === (ownDirection ?? result.governingDirection));
-    const admissibleHere =
-      chain !== null && d !== undefined && chainRejection(chain, layout, d.direction) === null;
+    const admissibleHere = chain !== null && d !== undefined && tools.rejection(chain, d.direction) === null;
     if (chain && d?.governing && !rejected && admissibleHere && !sameHoles(chain.holes, d.governing.holes)) {
       const governing = d.governing;
       if (
@@ -302,7 +318,57 @@ export function auditMember(
     );
   }
 
-  findings.push(...detailingFindings(member, profile, result, base));
+  // Block shear below the tensile strengths, neither claimed nor allowed for in `available`.
+  const block = result.blockShear;
+  if (block && block.available < result.governing.available) {
+    // A claimed `available` is compared with the lesser of the two (LG103/LG113) instead.
+    if (claims.available === undefined && claims.blockShear === undefined) {
+      findings.push(
+        makeFinding('LG132', {
+          ...at,
+          direction: block.direction,
+          recomputed: block.available,
+          message: `Block shear ${formatQuantity(block.available, 'force', u)} (${block.clause}${block.projectDefined ? ', staggered tension plane: project-defined' : ''}) is below the tensile ${result.governing.limitState} strength ${formatQuantity(result.governing.available, 'force', u)}`,
+          pointer: `${base}/blockShear`,
+        }),
+      );
+    }
+  }
+
+  // Tabulated gross area against the elements (LG141), shear lag without a rule (LG142).
+  const gross = result.grossArea;
+  if (
+    gross?.tabulated !== undefined &&
+    !withinTolerance(gross.tabulated, gross.fromElements, 'area', tolerance)
+  ) {
+    findings.push(
+      makeFinding('LG141', {
+        ...at,
+        claimed: gross.tabulated,
+        recomputed: gross.fromElements,
+        message: `Tabulated Ag ${formatQuantity(gross.tabulated, 'area', u)} is used; the flat elements give ${formatQuantity(gross.fromElements, 'area', u)}${percent(gross.tabulated, gross.fromElements)}`,
+        pointer: `${base}/section/Ag`,
+      }),
+    );
+  }
+  if (result.shearLag?.notApplicable !== undefined) {
+    findings.push(
+      makeFinding('LG142', {
+        ...at,
+        recomputed: 1,
+        message: `Shear lag: ${result.shearLag.notApplicable}; U taken as 1.0`,
+        pointer: member.shearLag ? `${base}/load/shearLag` : `${base}/load`,
+      }),
+    );
+  }
+
+  if (profile.standard === 'EN 1993-1-1' || profile.standard === 'CSA S16-19') {
+    findings.push(...profileDetailingFindings(member, profile, result, base));
+  } else if (member.section) {
+    findings.push(...sectionDetailingFindings(member, profile, result, base));
+  } else {
+    findings.push(...detailingFindings(member, profile, result, base));
+  }
 
   const rank = new Map(CLASS_ORDER.map((c, i) => [c, i] as const));
   const ordered = findings

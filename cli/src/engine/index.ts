@@ -31,3 +31,18 @@ export { formatQuantity, type Dimension } from './formatQuantity.js';
 export { formatDirection } from './formatDirection.js';
 export { auditMember } from './auditMember.js';
 export { auditCalc } from './auditCalc.js';
+export { tensionProfileOf } from './tensionProfileOf.js';
+export { memberHoleWidth } from './memberHoleWidth.js';
+export { memberSection } from './memberSection.js';
+export { memberShearLag } from './memberShearLag.js';
+export { memberBlockShear } from './memberBlockShear.js';
+export { memberChainTools, memberUnfolded, type MemberChainTools } from './memberChainTools.js';
+export { sectionChainAsChain, memberSectionLayout } from './analyseMember.js';
+export { elementHoleGroups, type ElementHoleGroup } from './elementHoleGroups.js';
+export { sectionDetailingFindings } from './sectionDetailingFindings.js';
+export { profileDetailingFindings } from './profileDetailingFindings.js';
+// Members made of flat elements, shear lag, block shear, and the EN 1993 / CSA S16 profiles.
+export * from './sections/index.js';
+export * from './shear-lag/index.js';
+export * from './block-shear/index.js';
+export * from './profiles/index.js';

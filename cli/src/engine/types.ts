@@ -24,12 +24,17 @@ export type UnitSystem = 'in' | 'mm';
 export type LoadDirection = '-x' | '+x';
 
 /** Design code profiles the engine knows. */
-export type CodeStandard = 'AISC 360-22' | 'AISC 360-16' | 'AISC 360-10';
+export type CodeStandard = 'AISC 360-22' | 'AISC 360-16' | 'AISC 360-10' | 'EN 1993-1-1' | 'CSA S16-19';
 
 /** Design method: load and resistance factor design or allowable strength design. */
 export type DesignMethod = 'LRFD' | 'ASD';
 
-export type MemberKind = 'plate' | 'splice-plate' | 'gusset';
+/**
+ * What the member is: a plate (`plate`, `splice-plate`, `gusset`) or a rolled shape made of flat
+ * elements (`angle`, `double-angle`, `tee`, `w-shape`, `channel`; these carry a `section`).
+ */
+export type MemberKind =
+  'plate' | 'splice-plate' | 'gusset' | 'angle' | 'double-angle' | 'tee' | 'w-shape' | 'channel';
 
 export type HoleType = 'standard' | 'oversized' | 'short-slotted' | 'long-slotted';
 
@@ -41,6 +46,11 @@ export interface CodeProfile {
   readonly standard: CodeStandard;
   readonly method: DesignMethod;
   readonly units: UnitSystem;
+  /**
+   * Partial factors a National Annex sets (EN 1993-1-1 only; recommended γM0 = 1.00, γM2 = 1.25
+   * when absent).
+   */
+  readonly nationalAnnex?: { readonly gammaM0?: number; readonly gammaM2?: number };
 }
 
 /** A hole as the engine sees it, after the calc file has been parsed and normalised. */
@@ -58,6 +68,10 @@ export interface HoleInput {
    * `length` along the load (equal for round holes). The damage allowance is still added.
    */
   readonly dimension?: { readonly across: number; readonly along: number };
+  /** Section members: id of the element the hole lies in (e.g. `leg-a`, `flange-1`, `web`). */
+  readonly element?: string;
+  /** Section members: gauge as the element's datum says (see sections/README.md §2). */
+  readonly gauge?: number;
 }
 
 export interface MaterialInput {
@@ -66,6 +80,48 @@ export interface MaterialInput {
   readonly Fy: number;
   /** Specified minimum tensile strength (ksi or MPa). */
   readonly Fu: number;
+}
+
+/** A rolled shape given by its dimensions (see sections/README.md). */
+export interface MemberSectionInput {
+  readonly shape: 'angle' | 'tee' | 'w-shape' | 'channel';
+  /** Angle: leg lengths a (leg-a), b (leg-b) and thickness t. */
+  readonly a?: number;
+  readonly b?: number;
+  readonly t?: number;
+  /** Tee, W-shape, channel: depth d, flange width bf, flange thickness tf, web (stem) thickness tw. */
+  readonly d?: number;
+  readonly bf?: number;
+  readonly tf?: number;
+  readonly tw?: number;
+  /** Identical pieces acting together (2 for a double angle back to back); default 1. */
+  readonly pieces?: number;
+  /** Tabulated gross area of all pieces; wins over the elements' sum (the difference is reported). */
+  readonly tabulatedAg?: number;
+}
+
+/** Connection data for shear lag (AISC 360 Table D3.1, CSA S16 12.3.3.2, EN 1993-1-8 3.10.3). */
+export interface ShearLagSpec {
+  /** Which element carries the fasteners. */
+  readonly connected: 'flange' | 'web' | 'leg' | 'other';
+  /** Connection length l, first to last fastener along the load. */
+  readonly length?: number;
+  /** Connection eccentricity x̄ (or ȳ). */
+  readonly xbar?: number;
+  /** Fasteners per line along the load (transverse lines of fasteners). */
+  readonly fastenersPerLine?: number;
+}
+
+/** Block shear input: which bolt group tears out and how. */
+export interface BlockShearSpec {
+  /** Section members: ids of the connected elements that tear out together (default all with holes). */
+  readonly elements?: readonly string[];
+  /** End distance from the last bolt row to the loaded end of the member, along the load. */
+  readonly endDistance: number;
+  /** AISC Ubs (1 uniform, 0.5 not); EN: 1 concentric, 0.5 eccentric; CSA Ut given separately. Default 1. */
+  readonly Ubs?: 1 | 0.5;
+  /** CSA S16 13.11 efficiency factor Ut (default 1.0). */
+  readonly Ut?: number;
 }
 
 /** A member as the engine sees it. */
@@ -83,6 +139,15 @@ export interface MemberInput {
   readonly U?: number;
   /** Required strength (Pu for LRFD, Pa for ASD), kip or kN. */
   readonly requiredStrength?: number;
+  /**
+   * A rolled shape: holes then give `element` and `gauge`; `width` and `thickness` are the unfolded
+   * width and the first element's thickness (for drawing), and `y` the unfolded position.
+   */
+  readonly section?: MemberSectionInput;
+  /** Connection data the shear lag factor is found from (ignored when U is given). */
+  readonly shearLag?: ShearLagSpec;
+  /** Block shear of the bolt group at the loaded end. */
+  readonly blockShear?: BlockShearSpec;
 }
 
 /** Hole width the engine deducts, with how it was found. */
@@ -200,6 +265,59 @@ export interface MemberResult {
   readonly governing: Strength;
   /** requiredStrength / governing.available, when a required strength is given. */
   readonly utilisation?: number;
+  /** Section members: gross area from the elements and as tabulated. */
+  readonly grossArea?: MemberGrossArea;
+  /** How U was found (absent for a plate with the default or a given U). */
+  readonly shearLag?: MemberShearLag;
+  /** Block shear, when block-shear input is given: the governing direction's result. */
+  readonly blockShear?: MemberBlockShear;
+  /** Clause of each strength, for EN 1993 and CSA S16 profiles. */
+  readonly clauses?: { readonly yielding: string; readonly rupture: string };
+}
+
+/** Gross area of a section member. */
+export interface MemberGrossArea {
+  readonly fromElements: number;
+  readonly tabulated?: number;
+  /** The value used (tabulated when given). */
+  readonly used: number;
+  /** tabulated − fromElements. */
+  readonly difference?: number;
+}
+
+/** The shear lag factor and its basis. */
+export interface MemberShearLag {
+  readonly U: number;
+  /** `D3.1 case 2/7/8`, `given`, `CSA S16 12.3.3.2`, `EN 1993-1-8 3.10.3`, or `none`. */
+  readonly rule: string;
+  /** One line with the numbers. */
+  readonly basis: string;
+  /** Set when no rule applied to the connection data given: U was taken as 1.0 (LG142). */
+  readonly notApplicable?: string;
+}
+
+/** Block shear areas and strength of one tear-out (all elements and pieces torn out together). */
+export interface MemberBlockShear {
+  readonly direction: LoadDirection;
+  readonly Agv: number;
+  readonly Anv: number;
+  readonly Agt: number;
+  readonly Ant: number;
+  readonly nominal: number;
+  readonly factor: number;
+  readonly available: number;
+  readonly clause: string;
+  /** The governing outline of each connected element's layout. */
+  readonly parts: readonly {
+    readonly element: string;
+    readonly kind: string;
+    readonly tensionHoles: readonly string[];
+    readonly staggerSum: number;
+    readonly source: 'code' | 'project-defined';
+    readonly available: number;
+  }[];
+  /** True when any part's tension plane is staggered (project-defined). */
+  readonly projectDefined: boolean;
 }
 
 export type Severity = 'error' | 'warning' | 'note';
