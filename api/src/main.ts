@@ -1,11 +1,23 @@
 import { Logger } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
-import { appConfig, authConfig, DEMO_JWT_SECRET } from './config/index.js';
-import { createApp } from './create-app.js';
-import { SeedService } from './seed/seed.service.js';
+import { appConfig, authConfig, DEMO_JWT_SECRET, environmentProblem } from './config/index.js';
+
+const problem = environmentProblem();
+if (problem) {
+  process.stderr.write(`Ligament could not start: ${problem}\n`);
+  process.exit(1);
+}
+// Imported only now: the app module validates the environment as it loads.
+const { createApp } = await import('./create-app.js');
+const { SeedService } = await import('./seed/seed.service.js');
 
 const logger = new Logger('Ligament');
-const app = await createApp();
+const app = await createApp().catch((error: unknown) => {
+  // One line, not a stack trace: the usual causes are a bad environment or an unreadable database.
+  const message = error instanceof Error ? error.message.split('\n').slice(0, 6).join('\n') : String(error);
+  process.stderr.write(`Ligament could not start: ${message}\n`);
+  process.exit(1);
+});
 const config = app.get<ConfigType<typeof appConfig>>(appConfig.KEY);
 const auth = app.get<ConfigType<typeof authConfig>>(authConfig.KEY);
 

@@ -51,3 +51,13 @@ export function validateEnvironment(config: Record<string, unknown>): Record<str
   }
   return config;
 }
+
+/** The start-up check main.ts runs before it builds the app: the problem as text, or null. */
+export function environmentProblem(): string | null {
+  try {
+    validateEnvironment(process.env);
+    return null;
+  } catch (error) {
+    return error instanceof Error ? error.message : String(error);
+  }
+}

@@ -7,7 +7,7 @@ import { uploadsConfig } from './uploads.config.js';
 
 export { appConfig, authConfig, databaseConfig, mailConfig, throttleConfig, uploadsConfig };
 export { DEMO_JWT_SECRET } from './auth.config.js';
-export { validateEnvironment } from './env.validation.js';
+export { environmentProblem, validateEnvironment } from './env.validation.js';
 
 export const configNamespaces = [
   appConfig,
