@@ -425,10 +425,17 @@ function titleBlock(
   shapes.push(
     line(
       0,
-      `PL ${lengthLabel(member.thickness, u)} × ${lengthLabel(member.width, u)} ${u} · ${m.grade ?? 'steel'} (Fy ${m.Fy} ${stress}, Fu ${m.Fu} ${stress}) · ${member.holes.length} holes`,
+      `${['plate', 'splice-plate', 'gusset'].includes(member.kind) ? 'PL' : 'unfolded'} ${lengthLabel(member.thickness, u)} × ${lengthLabel(member.width, u)} ${u} · ${m.grade ?? 'steel'} (Fy ${m.Fy} ${stress}, Fu ${m.Fu} ${stress}) · ${member.holes.length} holes`,
     ),
   );
-  const sym = options.profile?.method === 'ASD' ? 'Pn/Ω' : 'φPn';
+  const std = options.profile?.standard ?? '';
+  const sym = std.startsWith('EN')
+    ? 'N,Rd'
+    : std.startsWith('CSA')
+      ? 'Tr'
+      : options.profile?.method === 'ASD'
+        ? 'Pn/Ω'
+        : 'φPn';
   shapes.push(
     line(
       1,

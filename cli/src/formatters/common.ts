@@ -1,5 +1,5 @@
 /** Small pure helpers shared by the formatters: units, numbers, labels. */
-import type { UnitSystem } from '../engine/types.js';
+import type { CodeProfile, UnitSystem } from '../engine/types.js';
 import type { FileReport, RunReport } from '../runner/types.js';
 
 export interface UnitLabels {
@@ -35,9 +35,14 @@ export function chainLabel(holes: readonly string[] | undefined): string {
   return holes.join('–');
 }
 
-/** The strength symbol for the design method: φPn (LRFD) or Pn/Ω (ASD). */
-export function strengthSymbol(method: 'LRFD' | 'ASD' | undefined): string {
-  return method === 'ASD' ? 'Pn/Ω' : 'φPn';
+/**
+ * The symbol of a design or allowable strength for a code profile: φPn (AISC LRFD), Pn/Ω (AISC
+ * ASD), N,Rd (EN 1993-1-1), Tr (CSA S16).
+ */
+export function strengthSymbol(profile: Pick<CodeProfile, 'standard' | 'method'> | undefined): string {
+  if (profile?.standard.startsWith('EN')) return 'N,Rd';
+  if (profile?.standard.startsWith('CSA')) return 'Tr';
+  return profile?.method === 'ASD' ? 'Pn/Ω' : 'φPn';
 }
 
 /** Pads to a width, counting code points (so `²` and `–` count as one). */

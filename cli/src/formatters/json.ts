@@ -97,6 +97,31 @@ function member(m: MemberReport) {
       rupture: strength(r.rupture),
       governing: strength(r.governing),
       ...(r.utilisation !== undefined ? { utilisation: r.utilisation } : {}),
+      ...(r.clauses ? { clauses: { yielding: r.clauses.yielding, rupture: r.clauses.rupture } } : {}),
+      ...(r.blockShear
+        ? {
+            blockShear: {
+              direction: r.blockShear.direction,
+              Agv: r.blockShear.Agv,
+              Anv: r.blockShear.Anv,
+              Agt: r.blockShear.Agt,
+              Ant: r.blockShear.Ant,
+              nominal: r.blockShear.nominal,
+              factor: r.blockShear.factor,
+              available: r.blockShear.available,
+              clause: r.blockShear.clause,
+              projectDefined: r.blockShear.projectDefined,
+              parts: r.blockShear.parts.map((p) => ({
+                element: p.element,
+                kind: p.kind,
+                tensionHoles: [...p.tensionHoles],
+                staggerSum: p.staggerSum,
+                source: p.source,
+                available: p.available,
+              })),
+            },
+          }
+        : {}),
     },
     findings: m.findings.map(finding),
   };

@@ -65,7 +65,7 @@ export function formatMarkdown(report: RunReport): string {
         .map(([s, n]) => `${n} ${s}${n === 1 ? '' : 's'}`)
         .join(', ');
       rows.push(
-        `| ${code(file.file)} | ${md(m.memberId)} | ${chains} | ${fmtArea(r.An, units)} ${u.area} | ${strengthSymbol(file.profile?.method)} ${fmtForce(r.governing.available)} ${u.force} (${r.governing.limitState}) | ${counts || 'none'} |`,
+        `| ${code(file.file)} | ${md(m.memberId)} | ${chains} | ${fmtArea(r.An, units)} ${u.area} | ${strengthSymbol(file.profile)} ${fmtForce(r.governing.available)} ${u.force} (${r.governing.limitState}) | ${counts || 'none'} |`,
       );
     }
   }

@@ -39,6 +39,9 @@ export interface TextOptions {
   readonly quiet?: boolean;
 }
 
+/** Member kinds drawn and described as one flat plate; sections are shown by their unfolded width. */
+const PLATE_KINDS = new Set(['plate', 'splice-plate', 'gusset']);
+
 function severityLabel(severity: string, paint: Paint): string {
   const label = severity.toUpperCase().padEnd(7);
   if (severity === 'error') return paint.red(label);
@@ -64,7 +67,7 @@ function memberBlock(file: FileReport, m: MemberReport, report: RunReport, paint
   const out: string[] = [];
   const grade = input.material.grade ? `  ${input.material.grade}` : '';
   out.push(
-    `  ${paint.bold(m.memberId)}  ${input.kind}  PL ${fmtLength(input.thickness, units)} × ${fmtLength(input.width, units)} ${u.length}${grade}  ${input.holeCount} holes`,
+    `  ${paint.bold(m.memberId)}  ${input.kind}  ${PLATE_KINDS.has(input.kind) ? 'PL' : 'unfolded'} ${fmtLength(input.thickness, units)} × ${fmtLength(input.width, units)} ${u.length}${grade}  ${input.holeCount} holes`,
   );
   const rows: string[][] = [['dir', 'governing chain', `wn ${u.length}`, `An ${u.area}`, 'equal share']];
   for (const d of r.directions) {
@@ -80,7 +83,7 @@ function memberBlock(file: FileReport, m: MemberReport, report: RunReport, paint
     ]);
   }
   for (const line of columns(rows, ['left', 'left', 'right', 'right', 'left'])) out.push(`    ${line}`);
-  const sym = strengthSymbol(file.profile?.method);
+  const sym = strengthSymbol(file.profile);
   const cap = r.capped ? ' (0.85 Ag cap)' : '';
   const util = r.utilisation !== undefined ? `   utilisation ${r.utilisation.toFixed(2)}` : '';
   out.push(
@@ -89,6 +92,12 @@ function memberBlock(file: FileReport, m: MemberReport, report: RunReport, paint
   out.push(
     `    ${sym} yielding ${fmtForce(r.yielding.available)} ${u.force}   rupture ${fmtForce(r.rupture.available)} ${u.force}   governs ${r.governing.limitState} ${fmtForce(r.governing.available)} ${u.force}${util}`,
   );
+  const bs = r.blockShear;
+  if (bs) {
+    out.push(
+      `    block shear (${bs.direction}, ${bs.clause}) ${fmtForce(bs.available)} ${u.force}   Agv ${fmtArea(bs.Agv, units)}  Anv ${fmtArea(bs.Anv, units)}  Agt ${fmtArea(bs.Agt, units)}  Ant ${fmtArea(bs.Ant, units)} ${u.area}${bs.projectDefined ? '   (staggered tension plane: project-defined)' : ''}`,
+    );
+  }
   const shown = m.findings;
   if (shown.length === 0) out.push(`    ${paint.green('no findings')}`);
   for (const f of shown) out.push(`    ${findingLine(file.file, f, paint)}`);
