@@ -12,7 +12,21 @@ import { fileURLToPath } from 'node:url';
 import { auditCalc, loadCalcText } from 'ligament';
 import type { MemberAudit } from 'ligament';
 
-type Quantity = 'holeWidth' | 'netWidth' | 'Ag' | 'An' | 'Ae' | 'U' | 'yielding' | 'rupture' | 'available';
+type Quantity =
+  | 'holeWidth'
+  | 'netWidth'
+  | 'Ag'
+  | 'An'
+  | 'Ae'
+  | 'U'
+  | 'yielding'
+  | 'rupture'
+  | 'available'
+  | 'Agv'
+  | 'Anv'
+  | 'Agt'
+  | 'Ant'
+  | 'blockShear';
 type Direction = '-x' | '+x';
 
 interface Source {
@@ -35,6 +49,14 @@ interface ExpectedMember {
   readonly yielding?: number;
   readonly rupture?: number;
   readonly available?: number;
+  /** Block shear of the governing tear-out: areas and available strength. */
+  readonly Agv?: number;
+  readonly Anv?: number;
+  readonly Agt?: number;
+  readonly Ant?: number;
+  readonly blockShear?: number;
+  /** `code` or `project-defined` (a staggered tension plane, no published example). */
+  readonly blockShearSource?: 'code' | 'project-defined';
   readonly holeWidths?: Readonly<Record<string, number>>;
   readonly directions?: Readonly<Partial<Record<Direction, ExpectedDirection>>>;
   readonly chains?: readonly { readonly holes: readonly string[]; readonly netWidth: number }[];
@@ -106,6 +128,19 @@ function checkMember(
   for (const q of SCALARS) {
     const e = exp[q];
     if (e !== undefined) near(q, q, scalar[q], e);
+  }
+
+  const block = r.blockShear;
+  for (const q of ['Agv', 'Anv', 'Agt', 'Ant', 'blockShear'] as const) {
+    const e = exp[q];
+    if (e === undefined) continue;
+    if (!block) failures.push(`${id} ${q}: expected ${e}, got no block shear result`);
+    else near(q, q, q === 'blockShear' ? block.available : block[q], e);
+  }
+  if (exp.blockShearSource !== undefined && block) {
+    const got = block.projectDefined ? 'project-defined' : 'code';
+    if (got !== exp.blockShearSource)
+      failures.push(`${id}: expected a ${exp.blockShearSource} block shear outline, got ${got}`);
   }
 
   for (const [holeId, e] of Object.entries(exp.holeWidths ?? {})) {
