@@ -72,6 +72,11 @@ const noteLabel: Record<MoveInput['to'], string> = {
   waived: 'Why it is waived',
 };
 
+/** Six significant figures, enough to see a difference without float noise (3.9124999… → 3.9125). */
+function showNumber(value: number | null): string {
+  return value === null ? '—' : String(Number(value.toPrecision(6)));
+}
+
 function eventText(type: string, data: Record<string, unknown>): string {
   const to = typeof data.to === 'string' ? data.to : undefined;
   const note =
@@ -182,7 +187,7 @@ export function DiscrepancyDetail({ discrepancyId, projectId, onClose, canCommen
           <>
             <span className={styles.label}>Claimed · recomputed</span>
             <span>
-              {d.claimed ?? '—'} · {d.recomputed ?? '—'}
+              {showNumber(d.claimed)} · {showNumber(d.recomputed)}
             </span>
           </>
         )}

@@ -17,7 +17,6 @@ import {
 } from '@fluentui/react-components';
 import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
 import type { Schema } from '@/lib/api-schemas';
-import { formatDate } from '@/lib/format';
 import type { DiscrepancyFilters } from '../api/get-discrepancies';
 import { StatusBadge } from './status-badge';
 
@@ -25,7 +24,7 @@ type Row = Schema<'DiscrepancyDto'>;
 
 const useStyles = makeStyles({
   wrap: { overflowX: 'auto' },
-  grid: { minWidth: '760px' },
+  grid: { minWidth: '680px' },
   code: { fontFamily: tokens.fontFamilyMonospace, fontWeight: tokens.fontWeightSemibold },
   message: {
     overflow: 'hidden',
@@ -35,9 +34,9 @@ const useStyles = makeStyles({
     WebkitBoxOrient: 'vertical',
   },
   active: { backgroundColor: tokens.colorBrandBackground2 },
-  narrow: { flexGrow: 0, flexShrink: 0, flexBasis: '96px' },
+  narrow: { flexGrow: 0, flexShrink: 0, flexBasis: '92px' },
   medium: { flexGrow: 0, flexShrink: 0, flexBasis: '128px' },
-  wide: { flexGrow: 3, flexShrink: 1, flexBasis: '0px', minWidth: '200px' },
+  wide: { flexGrow: 1, flexShrink: 1, flexBasis: '0px', minWidth: '180px' },
   sub: { display: 'block', color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase100 },
 });
 
@@ -107,13 +106,12 @@ export function DiscrepancyGrid({
       columnId: 'memberId',
       compare: noCompare,
       renderHeaderCell: () => 'Member',
-      renderCell: (d) => d.memberId ?? '—',
-    }),
-    createTableColumn<Row>({
-      columnId: 'fileName',
-      compare: noCompare,
-      renderHeaderCell: () => 'File',
-      renderCell: (d) => d.fileName,
+      renderCell: (d) => (
+        <span>
+          {d.memberId ?? '—'}
+          <span className={styles.sub}>{d.fileName}</span>
+        </span>
+      ),
     }),
     createTableColumn<Row>({
       columnId: 'status',
@@ -129,12 +127,6 @@ export function DiscrepancyGrid({
           {d.message}
         </Text>
       ),
-    }),
-    createTableColumn<Row>({
-      columnId: 'updatedAt',
-      compare: noCompare,
-      renderHeaderCell: () => 'Updated',
-      renderCell: (d) => formatDate(d.updatedAt),
     }),
   ];
   const sortable = new Set(['code', 'severity', 'class', 'memberId', 'fileName', 'status', 'updatedAt']);
