@@ -1,4 +1,4 @@
-import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import { ArgumentsHost, Catch, ExceptionFilter, HttpException, Logger } from '@nestjs/common';
 import type { Response } from 'express';
 import { STATUS_CODES } from 'node:http';
 import type { ErrorBody } from './error-body.js';
@@ -47,5 +47,3 @@ export class HttpErrorFilter implements ExceptionFilter {
     return details === undefined ? { statusCode, error, message } : { statusCode, error, message, details };
   }
 }
-
-export { HttpStatus };

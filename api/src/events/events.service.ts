@@ -44,21 +44,6 @@ export class EventsService {
     );
   }
 
-  async recordMany(inputs: readonly EventInput[], transaction?: Transaction): Promise<void> {
-    if (inputs.length === 0) return;
-    await this.events.bulkCreate(
-      inputs.map((input) => ({
-        type: input.type,
-        actorId: input.actorId,
-        projectId: input.projectId ?? null,
-        submittalId: input.submittalId ?? null,
-        discrepancyId: input.discrepancyId ?? null,
-        data: input.data ?? {},
-      })),
-      { transaction },
-    );
-  }
-
   async list(where: WhereOptions<Event>, page = 1, pageSize = 100): Promise<Page<EventView>> {
     const { rows, count } = await this.events.findAndCountAll({
       where,
