@@ -279,6 +279,18 @@ try {
     await page.getByTestId('discrepancy-row').first().waitFor();
     await shot('21-discrepancies-tablet');
   });
+
+  await runner.step('the dark theme keeps the drawing and the chart readable', async () => {
+    await page.setViewportSize({ width: 1280, height: 860 });
+    await page.getByRole('button', { name: 'Use the dark theme' }).click();
+    await go(`/submittals/${submittalId}`);
+    await page.getByRole('tab', { name: /splice-plates\.json/ }).click();
+    await page.getByTestId('member-drawing').waitFor();
+    await shot('22-submittal-dark');
+    await go(`/projects/${projectId}`);
+    await page.locator('.recharts-surface').first().waitFor();
+    await shot('23-project-dark');
+  });
 } finally {
   if (consoleErrors.length > 0) runner.fail('no console errors', consoleErrors.join('\n    '));
   await browser.close();
