@@ -1,5 +1,6 @@
 import type { CodeProfile, LoadDirection, MemberInput, MemberResult, UnitSystem } from '../engine/types.js';
 import { lengthLabel, netWidthLabel } from './labels.js';
+import { sectionStripShapes } from './sectionStrips.js';
 import type { DimensionShape, Drawing, FractureShape, Point, Shape, TextShape } from './types.js';
 
 export interface DrawOptions {
@@ -100,6 +101,12 @@ export function buildDrawing(member: MemberInput, result: MemberResult, options:
   shapes.push({ kind: 'line', from: [left, bottom], to: [right, bottom], stroke: 'outline' });
   for (const edge of [left, right])
     shapes.push({ kind: 'polyline', points: breakLine(edge, top, bottom), closed: false, stroke: 'outline' });
+  // A rolled shape is drawn unfolded: element strips, dashed junction lines, each element's thickness.
+  if (member.section) {
+    const holeYs = holes.map((h) => h.y);
+    const holeXs = holes.map((h) => X(h.x));
+    shapes.push(...sectionStripShapes(member.section, { left, right, Y, holeYs, holeXs }, units));
+  }
   const gaugeYs = distinctSorted(
     holes.map((h) => h.y),
     eps,
