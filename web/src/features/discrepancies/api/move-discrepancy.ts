@@ -3,25 +3,45 @@ import { z } from 'zod';
 import { api, unwrap } from '@/lib/api-client';
 import { notify } from '@/lib/notify';
 
-export const moveInputSchema = z.object({
-  to: z.enum(['answered', 'accepted', 'returned', 'waived']),
-  note: z.string().trim().max(4000).optional(),
-});
-export type MoveInput = z.infer<typeof moveInputSchema>;
-
-/** What each move must carry (the API's rule, shown before sending so the form can say so). */
-export const moveNeedsNote: Record<MoveInput['to'], boolean> = {
+/**
+ * What each move must carry (the API's rule, shown before sending so the form can say so). An answer
+ * needs a note or a linked revision.
+ */
+export const moveNeedsNote: Record<'answered' | 'accepted' | 'returned' | 'waived', boolean> = {
   answered: true,
   accepted: false,
   returned: true,
   waived: true,
 };
 
+export const moveInputSchema = z
+  .object({
+    to: z.enum(['answered', 'accepted', 'returned', 'waived']),
+    note: z.string().trim().max(4000).optional(),
+    /** answered only: the submittal that revises the discrepancy's submittal. */
+    revisionSubmittalId: z.number().int().min(1).optional(),
+  })
+  .refine((m) => m.to !== 'answered' || Boolean(m.note) || m.revisionSubmittalId !== undefined, {
+    message: 'An answer needs a note or a linked revision.',
+    path: ['note'],
+  })
+  .refine((m) => m.to === 'answered' || Boolean(m.note) || !moveNeedsNote[m.to], {
+    message: 'This move needs a note.',
+    path: ['note'],
+  });
+export type MoveInput = z.infer<typeof moveInputSchema>;
+
 export async function moveDiscrepancy(discrepancyId: number, input: MoveInput) {
   return unwrap(
     await api.POST('/api/discrepancies/{discrepancyId}/transitions', {
       params: { path: { discrepancyId } },
-      body: { to: input.to, ...(input.note ? { note: input.note } : {}) },
+      body: {
+        to: input.to,
+        ...(input.note ? { note: input.note } : {}),
+        ...(input.to === 'answered' && input.revisionSubmittalId !== undefined
+          ? { revisionSubmittalId: input.revisionSubmittalId }
+          : {}),
+      },
     }),
   );
 }

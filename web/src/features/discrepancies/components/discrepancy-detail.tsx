@@ -1,10 +1,13 @@
 import {
   Button,
   Divider,
+  Dropdown,
   Field,
   makeStyles,
   MessageBar,
   MessageBarBody,
+  Option,
+  Spinner,
   Subtitle2,
   Text,
   Textarea,
@@ -21,7 +24,8 @@ import { formatDateTime } from '@/lib/format';
 import { useAcknowledgeDiscrepancy } from '../api/acknowledge-discrepancy';
 import { commentInputSchema, useCommentOnDiscrepancy } from '../api/comment-discrepancy';
 import { useDiscrepancy } from '../api/get-discrepancy';
-import { moveNeedsNote, useMoveDiscrepancy, type MoveInput } from '../api/move-discrepancy';
+import { useRevisionCandidates } from '../api/get-revision-candidates';
+import { moveInputSchema, moveNeedsNote, useMoveDiscrepancy, type MoveInput } from '../api/move-discrepancy';
 import { StatusBadge, statusLabels, type DiscrepancyStatus } from './status-badge';
 
 const useStyles = makeStyles({
@@ -66,7 +70,7 @@ const moveVerb: Record<MoveInput['to'], string> = {
   waived: 'Waive',
 };
 const noteLabel: Record<MoveInput['to'], string> = {
-  answered: 'Your answer (what was changed, or why the claim stands)',
+  answered: 'Your answer (what was changed, or why the claim stands; optional with a linked revision)',
   accepted: 'Note (optional)',
   returned: 'Why it goes back to the consultant',
   waived: 'Why it is waived',
@@ -83,6 +87,56 @@ function eventText(type: string, data: Record<string, unknown>): string {
     typeof data.note === 'string' ? data.note : typeof data.reason === 'string' ? data.reason : undefined;
   const verb = type.replace(/^discrepancy\./, '').replace(/-/g, ' ');
   return `${to ? `moved to ${to}` : verb}${note ? ` — “${note}”` : ''}`;
+}
+
+const NO_REVISION = 'none';
+
+/** The answer's optional link to a revision: only submittals uploaded as a revision of this one. */
+function RevisionPicker({
+  projectId,
+  submittalId,
+  value,
+  onChange,
+}: {
+  projectId: number;
+  submittalId: number;
+  value: number | undefined;
+  onChange: (id: number | undefined) => void;
+}) {
+  const candidates = useRevisionCandidates(projectId, submittalId, true);
+  if (candidates.isPending) return <Spinner size="tiny" label="Looking for revisions…" />;
+  if (candidates.isError)
+    return <ErrorState error={candidates.error} title="The revisions could not be listed" />;
+  if (candidates.data.length === 0)
+    return (
+      <Text size={200}>
+        No revision of submittal #{submittalId} yet. Upload the corrected files as a revision of #
+        {submittalId} to link them to the answer.
+      </Text>
+    );
+  const chosen = candidates.data.find((s) => s.id === value);
+  return (
+    <Field label="Revision that answers it" hint="Later submittals uploaded as a revision of this one.">
+      <Dropdown
+        value={chosen ? `#${chosen.id} ${chosen.title}` : 'No revision'}
+        selectedOptions={[value === undefined ? NO_REVISION : String(value)]}
+        onOptionSelect={(_, d) =>
+          onChange(d.optionValue === NO_REVISION || !d.optionValue ? undefined : Number(d.optionValue))
+        }
+      >
+        <Option value={NO_REVISION}>No revision</Option>
+        {candidates.data.map((s) => (
+          <Option key={s.id} value={String(s.id)} text={`#${s.id} ${s.title}`}>
+            {`#${s.id} ${s.title} · ${formatDateTime(s.createdAt)}`}
+          </Option>
+        ))}
+      </Dropdown>
+    </Field>
+  );
+}
+
+function linkedRevision(data: Record<string, unknown>): number | undefined {
+  return typeof data.revisionSubmittalId === 'number' ? data.revisionSubmittalId : undefined;
 }
 
 export interface DiscrepancyDetailProps {
@@ -102,6 +156,7 @@ export function DiscrepancyDetail({ discrepancyId, projectId, onClose, canCommen
   const acknowledge = useAcknowledgeDiscrepancy(discrepancyId, projectId);
   const [pending, setPending] = useState<MoveInput['to'] | null>(null);
   const [note, setNote] = useState('');
+  const [revisionId, setRevisionId] = useState<number | undefined>();
   const [noteError, setNoteError] = useState<string | undefined>();
   const [commentBody, setCommentBody] = useState('');
   const [commentError, setCommentError] = useState<string | undefined>();
@@ -113,20 +168,23 @@ export function DiscrepancyDetail({ discrepancyId, projectId, onClose, canCommen
 
   const sendMove = () => {
     if (!pending) return;
-    if (moveNeedsNote[pending] && !note.trim()) {
-      setNoteError('This move needs a note.');
+    const parsed = moveInputSchema.safeParse({
+      to: pending,
+      note: note.trim() || undefined,
+      revisionSubmittalId: pending === 'answered' ? revisionId : undefined,
+    });
+    if (!parsed.success) {
+      setNoteError(parsed.error.issues[0]?.message);
       return;
     }
     setNoteError(undefined);
-    move.mutate(
-      { to: pending, note: note.trim() || undefined },
-      {
-        onSuccess: () => {
-          setPending(null);
-          setNote('');
-        },
+    move.mutate(parsed.data, {
+      onSuccess: () => {
+        setPending(null);
+        setNote('');
+        setRevisionId(undefined);
       },
-    );
+    });
   };
 
   const sendComment = () => {
@@ -228,11 +286,19 @@ export function DiscrepancyDetail({ discrepancyId, projectId, onClose, canCommen
             <>
               <Field
                 label={noteLabel[pending]}
-                required={moveNeedsNote[pending]}
+                required={moveNeedsNote[pending] && !(pending === 'answered' && revisionId !== undefined)}
                 validationMessage={noteError}
               >
                 <Textarea value={note} onChange={(_, v) => setNote(v.value)} rows={3} resize="vertical" />
               </Field>
+              {pending === 'answered' && (
+                <RevisionPicker
+                  projectId={projectId}
+                  submittalId={d.submittalId}
+                  value={revisionId}
+                  onChange={setRevisionId}
+                />
+              )}
               <div className={styles.moves}>
                 <Button appearance="primary" onClick={sendMove} disabled={move.isPending}>
                   {move.isPending
@@ -294,6 +360,12 @@ export function DiscrepancyDetail({ discrepancyId, projectId, onClose, canCommen
           <li key={e.id} className={styles.item}>
             <Text block>
               {e.actor ? `${e.actor.name} (${e.actor.role})` : 'Ligament'} {eventText(e.type, e.data)}
+              {linkedRevision(e.data) !== undefined && (
+                <>
+                  {' · revision '}
+                  <Link to={paths.submittal.getHref(linkedRevision(e.data)!)}>#{linkedRevision(e.data)}</Link>
+                </>
+              )}
             </Text>
             <Text className={styles.meta}>{formatDateTime(e.at)}</Text>
           </li>

@@ -4,12 +4,18 @@ import { STATUSES, statusLabels } from './status-badge';
 
 const useStyles = makeStyles({
   bar: {
-    display: 'grid',
-    gridTemplateColumns: 'repeat(auto-fit, minmax(150px, 1fr))',
-    gap: tokens.spacingHorizontalM,
-    alignItems: 'end',
+    display: 'flex',
+    flexWrap: 'wrap',
+    columnGap: tokens.spacingHorizontalM,
+    rowGap: tokens.spacingVerticalS,
+    alignItems: 'flex-end',
     marginBottom: tokens.spacingVerticalM,
   },
+  choice: { flexGrow: 2, flexShrink: 1, flexBasis: '200px', minWidth: 0 },
+  text: { flexGrow: 1, flexShrink: 1, flexBasis: '120px', minWidth: 0 },
+  // Fluent's Dropdown keeps a wide min-width of its own; the field decides the width here.
+  control: { minWidth: 0, width: '100%' },
+  clear: { flexGrow: 0, flexShrink: 0 },
 });
 
 export interface FilterValues {
@@ -41,10 +47,12 @@ function MultiSelect({
   selected: readonly string[];
   onChange: (next: string[]) => void;
 }) {
+  const styles = useStyles();
   return (
-    <Field label={label}>
+    <Field label={label} className={styles.choice}>
       <Dropdown
         multiselect
+        className={styles.control}
         placeholder="Any"
         selectedOptions={[...selected]}
         value={selected.map((s) => labels[s] ?? s).join(', ')}
@@ -86,21 +94,25 @@ export function DiscrepancyFilters({ values, onChange, onClear }: DiscrepancyFil
         selected={values.severity}
         onChange={(severity) => onChange({ severity })}
       />
-      <Field label="Member">
+      <Field label="Member" className={styles.text}>
         <Input
+          className={styles.control}
           value={values.memberId}
           placeholder="e.g. SP-1"
           onChange={(_, d) => onChange({ memberId: d.value })}
         />
       </Field>
-      <Field label="Code">
+      <Field label="Code" className={styles.text}>
         <Input
+          className={styles.control}
           value={values.code}
           placeholder="e.g. LG101"
           onChange={(_, d) => onChange({ code: d.value })}
         />
       </Field>
-      <Button onClick={onClear}>Clear filters</Button>
+      <Button className={styles.clear} onClick={onClear}>
+        Clear filters
+      </Button>
     </div>
   );
 }

@@ -15,6 +15,7 @@ import {
   type TableColumnDefinition,
   type TableColumnId,
 } from '@fluentui/react-components';
+import { useEffect, useState } from 'react';
 import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
 import type { Schema } from '@/lib/api-schemas';
 import type { DiscrepancyFilters } from '../api/get-discrepancies';
@@ -24,23 +25,39 @@ type Row = Schema<'DiscrepancyDto'>;
 
 const useStyles = makeStyles({
   wrap: { overflowX: 'auto' },
-  grid: { minWidth: '680px' },
-  code: { fontFamily: tokens.fontFamilyMonospace, fontWeight: tokens.fontWeightSemibold },
-  message: {
-    overflow: 'hidden',
-    textOverflow: 'ellipsis',
-    display: '-webkit-box',
-    WebkitLineClamp: '2',
-    WebkitBoxOrient: 'vertical',
+  grid: { minWidth: '560px' },
+  stack: {
+    display: 'flex',
+    flexDirection: 'column',
+    alignItems: 'flex-start',
+    gap: '4px',
+    paddingBlock: '6px',
   },
+  code: { fontFamily: tokens.fontFamilyMonospace, fontWeight: tokens.fontWeightSemibold },
+  message: { whiteSpace: 'normal', overflowWrap: 'anywhere', paddingTop: '6px', paddingBottom: '6px' },
   active: { backgroundColor: tokens.colorBrandBackground2 },
-  narrow: { flexGrow: 0, flexShrink: 0, flexBasis: '92px' },
-  medium: { flexGrow: 0, flexShrink: 0, flexBasis: '128px' },
-  wide: { flexGrow: 1, flexShrink: 1, flexBasis: '0px', minWidth: '180px' },
+  narrow: { flexGrow: 0, flexShrink: 0, flexBasis: '88px' },
+  badge: { flexGrow: 0, flexShrink: 0, flexBasis: '100px' },
+  medium: { flexGrow: 0, flexShrink: 0, flexBasis: '124px' },
+  wide: { flexGrow: 1, flexShrink: 1, flexBasis: '0px', minWidth: '160px' },
   sub: { display: 'block', color: tokens.colorNeutralForeground3, fontSize: tokens.fontSizeBase100 },
 });
 
 const noCompare = () => 0;
+
+/** Below this width severity and class share one column and the status sits under the code. */
+const COMPACT_QUERY = '(max-width: 1040px)';
+
+function useCompact(): boolean {
+  const [compact, setCompact] = useState(() => window.matchMedia(COMPACT_QUERY).matches);
+  useEffect(() => {
+    const query = window.matchMedia(COMPACT_QUERY);
+    const onChange = () => setCompact(query.matches);
+    query.addEventListener('change', onChange);
+    return () => query.removeEventListener('change', onChange);
+  }, []);
+  return compact;
+}
 
 export interface DiscrepancyGridProps {
   readonly items: readonly Row[];
@@ -70,25 +87,27 @@ export function DiscrepancyGrid({
   onOpen,
 }: DiscrepancyGridProps) {
   const styles = useStyles();
-  const columns: TableColumnDefinition<Row>[] = [
+  const compact = useCompact();
+  const codeButton = (d: Row) => (
+    <Button
+      appearance="transparent"
+      size="small"
+      className={styles.code}
+      onClick={(event) => {
+        event.stopPropagation();
+        onOpen(d.id);
+      }}
+      aria-label={`Open ${d.code} ${d.memberId ?? ''} details`}
+    >
+      {d.code}
+    </Button>
+  );
+  const wideColumns: TableColumnDefinition<Row>[] = [
     createTableColumn<Row>({
       columnId: 'code',
       compare: noCompare,
       renderHeaderCell: () => 'Code',
-      renderCell: (d) => (
-        <Button
-          appearance="transparent"
-          size="small"
-          className={styles.code}
-          onClick={(event) => {
-            event.stopPropagation();
-            onOpen(d.id);
-          }}
-          aria-label={`Open ${d.code} ${d.memberId ?? ''} details`}
-        >
-          {d.code}
-        </Button>
-      ),
+      renderCell: codeButton,
     }),
     createTableColumn<Row>({
       columnId: 'severity',
@@ -129,19 +148,48 @@ export function DiscrepancyGrid({
       ),
     }),
   ];
+  const compactColumns: TableColumnDefinition<Row>[] = [
+    createTableColumn<Row>({
+      columnId: 'code',
+      compare: noCompare,
+      renderHeaderCell: () => 'Code · status',
+      renderCell: (d) => (
+        <span className={styles.stack}>
+          {codeButton(d)}
+          <StatusBadge status={d.status} />
+        </span>
+      ),
+    }),
+    createTableColumn<Row>({
+      columnId: 'severity',
+      compare: noCompare,
+      renderHeaderCell: () => 'Severity · class',
+      renderCell: (d) => (
+        <span className={styles.stack}>
+          <SeverityBadge severity={d.severity} />
+          <ClassBadge findingClass={d.class} />
+        </span>
+      ),
+    }),
+    ...wideColumns.filter((c) => c.columnId === 'memberId' || c.columnId === 'message'),
+  ];
+  const columns = compact ? compactColumns : wideColumns;
   const sortable = new Set(['code', 'severity', 'class', 'memberId', 'fileName', 'status', 'updatedAt']);
   const sizeOf = (columnId: TableColumnId) =>
     columnId === 'message'
       ? styles.wide
-      : columnId === 'class' || columnId === 'memberId'
+      : columnId === 'class' || columnId === 'memberId' || compact
         ? styles.medium
-        : styles.narrow;
+        : columnId === 'code'
+          ? styles.narrow
+          : styles.badge;
 
   return (
     <div className={styles.wrap}>
       <DataGrid
         className={styles.grid}
         items={[...items]}
+        key={compact ? 'compact' : 'wide'}
         columns={columns}
         getRowId={(d: Row) => d.id}
         sortable

@@ -1,6 +1,17 @@
-import { Button, Dropdown, Field, makeStyles, Option, Text, tokens } from '@fluentui/react-components';
+import {
+  Button,
+  DrawerBody,
+  Dropdown,
+  Field,
+  makeStyles,
+  mergeClasses,
+  Option,
+  OverlayDrawer,
+  Text,
+  tokens,
+} from '@fluentui/react-components';
 import { ChevronLeftRegular, ChevronRightRegular, DocumentBulletListRegular } from '@fluentui/react-icons';
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
@@ -16,12 +27,19 @@ import { DiscrepancyGrid } from '../components/discrepancy-grid';
 const useStyles = makeStyles({
   layout: {
     display: 'grid',
-    gridTemplateColumns: 'minmax(0, 1fr) minmax(340px, 420px)',
+    gridTemplateColumns: 'minmax(0, 1fr)',
     gap: tokens.spacingHorizontalL,
     alignItems: 'start',
-    '@media (max-width: 1180px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
   },
-  detail: { position: 'sticky', top: tokens.spacingVerticalL },
+  layoutWithDetail: { gridTemplateColumns: 'minmax(0, 1fr) minmax(360px, 420px)' },
+  detail: {
+    position: 'sticky',
+    top: tokens.spacingVerticalL,
+    maxHeight: `calc(100vh - 2 * ${tokens.spacingVerticalL})`,
+    overflowY: 'auto',
+    borderRadius: tokens.borderRadiusLarge,
+  },
+  drawerBody: { paddingTop: tokens.spacingVerticalL, paddingBottom: tokens.spacingVerticalL },
   pager: {
     display: 'flex',
     alignItems: 'center',
@@ -45,6 +63,20 @@ const SORTS: readonly DiscrepancyFilters['sort'][] = [
   'code',
   'fileName',
 ];
+/** Wide enough for the grid and the detail side by side; narrower, the detail opens as a drawer over the grid. */
+const WIDE_QUERY = '(min-width: 1400px)';
+
+function useWideLayout(): boolean {
+  const [wide, setWide] = useState(() => window.matchMedia(WIDE_QUERY).matches);
+  useEffect(() => {
+    const query = window.matchMedia(WIDE_QUERY);
+    const onChange = () => setWide(query.matches);
+    query.addEventListener('change', onChange);
+    return () => query.removeEventListener('change', onChange);
+  }, []);
+  return wide;
+}
+
 const list = (v: string | null) => (v ? v.split(',').filter(Boolean) : []);
 
 export function Component() {
@@ -54,12 +86,7 @@ export function Component() {
   const projects = useDiscrepancyProjects();
   const [selected, setSelected] = useState<Set<number>>(new Set());
   const [activeId, setActiveId] = useState<number | null>(null);
-  const detailRef = useRef<HTMLDivElement>(null);
-  // Below the two-column width the detail panel sits under the grid: bring it into view.
-  useEffect(() => {
-    if (activeId !== null && window.innerWidth < 1180)
-      detailRef.current?.scrollIntoView({ block: 'start', behavior: 'smooth' });
-  }, [activeId]);
+  const wide = useWideLayout();
 
   const projectId = params.get('projectId') ? Number(params.get('projectId')) : projects.data?.[0]?.id;
   const sortParam = params.get('sort') as DiscrepancyFilters['sort'] | null;
@@ -104,6 +131,17 @@ export function Component() {
   const pages = Math.max(1, Math.ceil(total / filters.pageSize));
   const project = projects.data?.find((p) => p.id === projectId);
 
+  const open = activeId !== null && projectId !== undefined;
+  const detailPanel = open ? (
+    <DiscrepancyDetail
+      key={activeId}
+      discrepancyId={activeId}
+      projectId={projectId}
+      onClose={() => setActiveId(null)}
+      canComment={role === 'checker' || role === 'consultant'}
+    />
+  ) : null;
+
   if (projects.isPending) return <LoadingState label="Loading your projects…" />;
   if (projects.isError) return <ErrorState error={projects.error} onRetry={() => void projects.refetch()} />;
   if (projects.data.length === 0)
@@ -139,7 +177,7 @@ export function Component() {
           ))}
         </Dropdown>
       </Field>
-      <div className={styles.layout}>
+      <div className={mergeClasses(styles.layout, open && wide && styles.layoutWithDetail)}>
         <Section>
           <FiltersBar
             values={filterValues}
@@ -229,24 +267,25 @@ export function Component() {
             </>
           )}
         </Section>
-        <div className={styles.detail} ref={detailRef}>
-          <Section>
-            {activeId !== null && projectId !== undefined ? (
-              <DiscrepancyDetail
-                key={activeId}
-                discrepancyId={activeId}
-                projectId={projectId}
-                onClose={() => setActiveId(null)}
-                canComment={role === 'checker' || role === 'consultant'}
-              />
-            ) : (
-              <EmptyState title="Choose a discrepancy">
-                Select its code in the grid to see its history, comments and the moves open to you.
-              </EmptyState>
-            )}
-          </Section>
-        </div>
+        {open && wide && (
+          <div className={styles.detail}>
+            <Section>{detailPanel}</Section>
+          </div>
+        )}
       </div>
+      {open && !wide && (
+        <OverlayDrawer
+          open
+          position="end"
+          size="medium"
+          onOpenChange={(_, d) => {
+            if (!d.open) setActiveId(null);
+          }}
+          aria-label="Discrepancy details"
+        >
+          <DrawerBody className={styles.drawerBody}>{detailPanel}</DrawerBody>
+        </OverlayDrawer>
+      )}
     </>
   );
 }
