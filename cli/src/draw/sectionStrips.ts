@@ -69,8 +69,8 @@ export function sectionStripShapes(
     }
   }
   // Each label at the point of its strip (middle first, then outward in 5 % steps to 10 % from the
-  // edges) farthest from junction and gauge lines.
-  const busy = [...junctions.flatMap((j) => j.lines.map((l) => l.y - lo)), ...frame.holeYs];
+  // edges) farthest from the outline, junction and gauge lines.
+  const busy = [0, hi - lo, ...junctions.flatMap((j) => j.lines.map((l) => l.y - lo)), ...frame.holeYs];
   for (const s of strips) {
     const candidates = Array.from(
       { length: 17 },
