@@ -1,0 +1,48 @@
+import { describe, expect, it } from 'vitest';
+import { holeWidth } from './holeWidth.js';
+import { memberBlockShear } from './memberBlockShear.js';
+import type { CodeProfile, MemberInput } from './types.js';
+
+const LRFD: CodeProfile = { standard: 'AISC 360-22', method: 'LRFD', units: 'in' };
+// Plate 10 × 1/2, A36, two lines of 3/4 in bolts at y = 3 and 7, rows at x = 0 and 3, end distance 1.5.
+const plate = (xs: readonly number[]): MemberInput => ({
+  id: 'P',
+  kind: 'gusset',
+  width: 10,
+  thickness: 0.5,
+  material: { Fy: 36, Fu: 58 },
+  directions: ['-x', '+x'],
+  holes: [3, 7].flatMap((y) =>
+    xs.map((x, i) => ({ id: `${y}-${i}`, x, y, boltDiameter: 0.75, type: 'standard' as const })),
+  ),
+  blockShear: { endDistance: 1.5 },
+});
+const widths = (m: MemberInput) => m.holes.map((h) => holeWidth(h, LRFD));
+
+describe('memberBlockShear', () => {
+  it('AISC 360 J4.3 two-plane tear-out of a plate by hand: Agv 4.5, Anv 3.1875, Agt 2.0, Ant 1.5625 in²', () => {
+    // Common practice, hand check: shear planes 2 × (3 + 1.5) = 9 in long less 1.5 holes each;
+    // tension plane 4 in less one hole; Rn = min(0.6·58·3.1875, 0.6·36·4.5) + 58·1.5625 = 97.2 + 90.625.
+    const m = plate([0, 3]);
+    const r = memberBlockShear(m, LRFD, widths(m), ['-x'])!;
+    expect([r.Agv, r.Anv, r.Agt, r.Ant]).toEqual([4.5, 3.1875, 2, 1.5625]);
+    expect(r.available).toBeCloseTo(0.75 * (97.2 + 90.625), 9);
+    expect(r.parts[0]!.kind).toBe('two-plane');
+    expect(r.projectDefined).toBe(false);
+  });
+
+  it('gives the same tear-out from either end for a symmetric bolt group, reporting the direction that governs', () => {
+    const m = plate([0, 3]);
+    const minus = memberBlockShear(m, LRFD, widths(m), ['-x'])!;
+    const plus = memberBlockShear(m, LRFD, widths(m), ['+x'])!;
+    expect(plus.available).toBeCloseTo(minus.available, 12);
+    expect(memberBlockShear(m, LRFD, widths(m), ['-x', '+x'])!.direction).toBe('-x');
+  });
+
+  it('is undefined without block-shear input or without holes', () => {
+    const { blockShear, ...bare } = plate([0, 3]);
+    void blockShear;
+    expect(memberBlockShear(bare, LRFD, widths(bare), ['-x'])).toBeUndefined();
+    expect(memberBlockShear({ ...plate([]), holes: [] }, LRFD, [], ['-x'])).toBeUndefined();
+  });
+});
