@@ -452,7 +452,7 @@ function titleBlock(
   shapes.push(
     line(
       2,
-      `${sym} ${result.governing.available.toFixed(1)} ${force} (${result.governing.limitState} governs)${options.profile ? ` · ${options.profile.standard} ${options.profile.method}` : ''}`,
+      `${sym} ${result.governing.available.toFixed(1)} ${force} (${result.governing.limitState} governs)${blockShearNote(result, force)}${options.profile ? ` · ${options.profile.standard} ${options.profile.method}` : ''}`,
     ),
   );
   shapes.push(
@@ -470,4 +470,11 @@ function titleBlock(
     );
   }
   return shapes;
+}
+
+/** Block shear is a connection limit state reported beside the member's: say so when it is lower. */
+function blockShearNote(result: MemberResult, force: string): string {
+  const bs = result.blockShear;
+  if (!bs || bs.available >= result.governing.available) return '';
+  return ` · block shear ${bs.available.toFixed(1)} ${force} is lower`;
 }
