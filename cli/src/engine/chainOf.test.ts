@@ -1,21 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { chainOf } from './chainOf.js';
 import { EngineError } from './engineError.js';
-import type { HoleLayout } from './types.js';
+import { d9 } from './layouts.fixtures.js';
 
 // AISC Design Examples v13.0, Example D.9: plate 14 × 1/2 in, hole width 0.875 in, outer holes at
 // y = 2 and 12, inner holes at y = 5 and 9 staggered 2.5 in (REFERENCES R1).
-const d9: HoleLayout = {
-  width: 14,
-  thickness: 0.5,
-  holes: [
-    { id: 'A', index: 0, x: 0, y: 2, deducted: 0.875 },
-    { id: 'B', index: 1, x: 2.5, y: 5, deducted: 0.875 },
-    { id: 'C', index: 2, x: 2.5, y: 9, deducted: 0.875 },
-    { id: 'D', index: 3, x: 0, y: 12, deducted: 0.875 },
-  ],
-};
-
 /** A value printed to `decimals` places in a source: the engine's value must round to it. */
 function expectPrinted(value: number, printed: number, decimals: number): void {
   expect(Math.abs(value - printed)).toBeLessThanOrEqual(0.5 * 10 ** -decimals + 1e-9);

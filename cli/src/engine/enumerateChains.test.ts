@@ -1,19 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { EngineError } from './engineError.js';
 import { enumerateChains } from './enumerateChains.js';
-import type { HoleLayout, PlacedHole } from './types.js';
-
-// AISC Design Examples v13.0 D.9 geometry (REFERENCES R1).
-const d9: HoleLayout = {
-  width: 14,
-  thickness: 0.5,
-  holes: [
-    { id: 'A', index: 0, x: 0, y: 2, deducted: 0.875 },
-    { id: 'B', index: 1, x: 2.5, y: 5, deducted: 0.875 },
-    { id: 'C', index: 2, x: 2.5, y: 9, deducted: 0.875 },
-    { id: 'D', index: 3, x: 0, y: 12, deducted: 0.875 },
-  ],
-};
+import type { PlacedHole } from './types.js';
+import { d9 } from './layouts.fixtures.js';
 
 describe('enumerateChains', () => {
   it('lists Π(holes per line + 1) − 1 chains: 15 for D.9, ascending, the least 11.5 in (published)', () => {

@@ -1,17 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { fractureSides } from './fractureSides.js';
 import type { HoleLayout } from './types.js';
-
-const d9: HoleLayout = {
-  width: 14,
-  thickness: 0.5,
-  holes: [
-    { id: 'A', index: 0, x: 0, y: 2, deducted: 0.875 },
-    { id: 'B', index: 1, x: 2.5, y: 5, deducted: 0.875 },
-    { id: 'C', index: 2, x: 2.5, y: 9, deducted: 0.875 },
-    { id: 'D', index: 3, x: 0, y: 12, deducted: 0.875 },
-  ],
-};
+import { d9 } from './layouts.fixtures.js';
 
 describe('fractureSides', () => {
   it('puts the holes beyond the straight D.9 chain A–D on the far side for -x and the loaded side for +x', () => {

@@ -1,18 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { rankChains } from './rankChains.js';
-import type { HoleLayout } from './types.js';
-
-// AISC Design Examples v13.0 D.9 geometry (REFERENCES R1).
-const d9: HoleLayout = {
-  width: 14,
-  thickness: 0.5,
-  holes: [
-    { id: 'A', index: 0, x: 0, y: 2, deducted: 0.875 },
-    { id: 'B', index: 1, x: 2.5, y: 5, deducted: 0.875 },
-    { id: 'C', index: 2, x: 2.5, y: 9, deducted: 0.875 },
-    { id: 'D', index: 3, x: 0, y: 12, deducted: 0.875 },
-  ],
-};
+import { d9 } from './layouts.fixtures.js';
 
 describe('rankChains', () => {
   it('ranks all chains and says in which directions each can form and what blocks it otherwise', () => {
