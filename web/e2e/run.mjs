@@ -1,7 +1,8 @@
 // Browser run of the whole review loop against the real built service on a temporary database:
 // an owner's rep notes the dashboard; a checker signs in, uploads three files (after the browser has
 // refused a broken one), reads the discrepancies and makes a move; a consultant answers one and makes
-// a CI token; the checker accepts it and stamps; the owner's rep sees the dashboard change. Any console
+// a CI token and answers another by linking a revision; the checker accepts, stamps and rechecks with the
+// current engine and reads the project activity; the owner's rep sees the dashboard change. Any console
 // error fails the run. Screenshots of every screen go to e2e/artifacts/.
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
@@ -204,6 +205,32 @@ try {
     await detail.getByRole('button', { name: /Answer: move to Answered/ }).click();
     await detail.getByText('Answered', { exact: true }).first().waitFor();
     await shot('12-consultant-answered');
+
+    // An answer that links the seeded revision (issue B) of issue A, with no note.
+    await go(`/projects/${projectId}`);
+    await page
+      .getByRole('link', { name: /issue A/i })
+      .first()
+      .click();
+    await page.getByRole('heading', { name: /issue A/i }).waitFor();
+    const issueA = Number(new URL(page.url()).pathname.split('/').pop());
+    expect(Number.isInteger(issueA), `issue A has an id (${page.url()})`);
+    await go(`/discrepancies?projectId=${projectId}&submittalId=${issueA}&status=raised`);
+    await page
+      .getByTestId('discrepancy-row')
+      .first()
+      .getByRole('button', { name: /Open .* details/ })
+      .click();
+    const answer = page.getByTestId('discrepancy-detail');
+    await answer.getByRole('button', { name: 'Answer' }).click();
+    const revisionSelect = answer.getByLabel('Revision that answers it');
+    const issueB = await revisionSelect.locator('option', { hasText: /issue B/i }).getAttribute('value');
+    expect(issueB, 'issue B is offered as the revision of issue A');
+    await revisionSelect.selectOption(String(issueB));
+    await answer.getByRole('button', { name: /Answer: move to Answered/ }).click();
+    await answer.getByText('Answered', { exact: true }).first().waitFor();
+    await shot('12b-answered-with-revision');
+    await answer.getByText(`moved to answered · revision #${issueB}`).waitFor();
     await go('/account');
     await page.getByLabel('Token name').fill('CI — harbour-lantern repository');
     await page.getByRole('button', { name: 'Create token' }).click();
@@ -245,6 +272,30 @@ try {
       .first()
       .waitFor();
     await shot('15-review-report');
+  });
+
+  await runner.step('checker rechecks the submittal and reads the project activity', async () => {
+    await go(`/submittals/${submittalId}`);
+    await page.getByRole('button', { name: /^Recheck with engine / }).click();
+    const result = page.getByTestId('recheck-result');
+    await result.waitFor();
+    await result.getByText(/rechecked with engine/).waitFor();
+    await shot('15b-recheck');
+    await go(`/projects/${projectId}`);
+    const log = page.getByTestId('activity-log');
+    await log
+      .getByText(new RegExp(`rechecked submittal #${submittalId} with engine`))
+      .first()
+      .waitFor();
+    await log
+      .getByText(/answered discrepancy #\d+ with revision #\d+/)
+      .first()
+      .waitFor();
+    await log
+      .getByText(new RegExp(`stamped submittal #${submittalId} “revise and resubmit”`))
+      .first()
+      .waitFor();
+    await shot('15c-project-activity');
   });
 
   await runner.step("owner's rep sees the dashboard change", async () => {

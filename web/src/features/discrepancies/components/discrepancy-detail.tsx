@@ -1,12 +1,11 @@
 import {
   Button,
   Divider,
-  Dropdown,
   Field,
   makeStyles,
   MessageBar,
   MessageBarBody,
-  Option,
+  Select,
   Spinner,
   Subtitle2,
   Text,
@@ -114,23 +113,20 @@ function RevisionPicker({
         {submittalId} to link them to the answer.
       </Text>
     );
-  const chosen = candidates.data.find((s) => s.id === value);
   return (
     <Field label="Revision that answers it" hint="Later submittals uploaded as a revision of this one.">
-      <Dropdown
-        value={chosen ? `#${chosen.id} ${chosen.title}` : 'No revision'}
-        selectedOptions={[value === undefined ? NO_REVISION : String(value)]}
-        onOptionSelect={(_, d) =>
-          onChange(d.optionValue === NO_REVISION || !d.optionValue ? undefined : Number(d.optionValue))
-        }
+      {/* A native select: the detail may sit in a modal drawer, where a popup list would open outside it. */}
+      <Select
+        value={value === undefined ? NO_REVISION : String(value)}
+        onChange={(_, d) => onChange(d.value === NO_REVISION ? undefined : Number(d.value))}
       >
-        <Option value={NO_REVISION}>No revision</Option>
+        <option value={NO_REVISION}>No revision</option>
         {candidates.data.map((s) => (
-          <Option key={s.id} value={String(s.id)} text={`#${s.id} ${s.title}`}>
+          <option key={s.id} value={String(s.id)}>
             {`#${s.id} ${s.title} · ${formatDateTime(s.createdAt)}`}
-          </Option>
+          </option>
         ))}
-      </Dropdown>
+      </Select>
     </Field>
   );
 }

@@ -14,6 +14,7 @@ import { useProjectCounts } from '../api/get-dashboard-counts';
 import { useOpenDiscrepancies } from '../api/get-open-discrepancies';
 import { getProjectQueryOptions, useProject } from '../api/get-project';
 import { getSubmittalsQueryOptions, useSubmittals } from '../api/get-submittals';
+import { ActivityLog } from '../components/activity-log';
 import { OpenFindingsChart, type RevisionCounts } from '../components/open-findings-chart';
 import { SubmittalsTable } from '../components/submittals-table';
 
@@ -92,19 +93,24 @@ export function Component() {
         }
       />
       <div className={styles.columns}>
-        <Section title="Submittals and revisions" labelId="submittals-heading">
-          {submittals.isPending ? (
-            <LoadingState label="Loading submittals…" />
-          ) : submittals.isError ? (
-            <ErrorState error={submittals.error} onRetry={() => void submittals.refetch()} />
-          ) : submittals.data.length === 0 ? (
-            <EmptyState title="Nothing submitted yet">
-              Upload calc files, or let the consultant's CI submit them with a project token.
-            </EmptyState>
-          ) : (
-            <SubmittalsTable submittals={submittals.data} />
-          )}
-        </Section>
+        <div>
+          <Section title="Submittals and revisions" labelId="submittals-heading">
+            {submittals.isPending ? (
+              <LoadingState label="Loading submittals…" />
+            ) : submittals.isError ? (
+              <ErrorState error={submittals.error} onRetry={() => void submittals.refetch()} />
+            ) : submittals.data.length === 0 ? (
+              <EmptyState title="Nothing submitted yet">
+                Upload calc files, or let the consultant's CI submit them with a project token.
+              </EmptyState>
+            ) : (
+              <SubmittalsTable submittals={submittals.data} />
+            )}
+          </Section>
+          <Section title="Activity" labelId="activity-heading">
+            <ActivityLog projectId={projectId} />
+          </Section>
+        </div>
         <div>
           <Section title="Open now, by class" labelId="open-heading">
             {counts.isPending ? (

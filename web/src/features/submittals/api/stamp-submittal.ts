@@ -40,8 +40,10 @@ export function useStampSubmittal(submittalId: number, projectId: number | undef
     mutationFn: (input: StampInput) => stampSubmittal(submittalId, input),
     onSuccess: () => {
       void queryClient.invalidateQueries({ queryKey: ['submittals', submittalId] });
-      if (projectId !== undefined)
+      if (projectId !== undefined) {
         void queryClient.invalidateQueries({ queryKey: ['projects', projectId, 'submittals'] });
+        void queryClient.invalidateQueries({ queryKey: ['projects', projectId, 'events'] });
+      }
       void queryClient.invalidateQueries({ queryKey: ['dashboard'] });
     },
   });

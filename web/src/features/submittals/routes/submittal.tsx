@@ -10,7 +10,7 @@ import {
   Text,
   tokens,
 } from '@fluentui/react-components';
-import { DocumentBulletListRegular, PrintRegular } from '@fluentui/react-icons';
+import { ArrowSyncRegular, DocumentBulletListRegular, PrintRegular } from '@fluentui/react-icons';
 import { useState } from 'react';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
@@ -19,14 +19,17 @@ import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
+import { useServerInfo } from '@/lib/server-info';
 import { sessionStore, useSession } from '@/lib/session';
 import { useCalcFile } from '../api/get-calc-file';
 import { useMemberResults } from '../api/get-member-results';
 import { getSubmittalQueryOptions, useSubmittal } from '../api/get-submittal';
 import { useSubmittalDiscrepancies } from '../api/get-submittal-discrepancies';
 import { getSubmittalFilesQueryOptions, useSubmittalFiles } from '../api/get-submittal-files';
+import { useRecheckSubmittal } from '../api/recheck-submittal';
 import { stampActionLabels } from '../api/stamp-submittal';
 import { MemberPanel } from '../components/member-panel';
+import { RecheckResult } from '../components/recheck-result';
 import { RevisionDiff } from '../components/revision-diff';
 import { StampDialog } from '../components/stamp-dialog';
 
@@ -118,6 +121,9 @@ export function Component() {
   const files = useSubmittalFiles(submittalId);
   const [tab, setTab] = useState<string | null>(null);
   const discrepancies = useSubmittalDiscrepancies(submittal.data?.projectId, submittalId);
+  const serverInfo = useServerInfo();
+  const recheck = useRecheckSubmittal(submittalId, submittal.data?.projectId ?? 0);
+  const engine = serverInfo.data?.engineVersion;
 
   if (submittal.isPending) return <LoadingState label="Loading the submittal…" />;
   if (submittal.isError)
@@ -146,6 +152,17 @@ export function Component() {
             <Button icon={<PrintRegular />} onClick={() => navigate(paths.report.getHref(s.id))}>
               Review report
             </Button>
+            {role === 'checker' && (
+              <Button
+                icon={<ArrowSyncRegular />}
+                onClick={() => recheck.mutate()}
+                disabled={recheck.isPending}
+              >
+                {recheck.isPending
+                  ? 'Rechecking…'
+                  : `Recheck with engine ${engine && engine !== 'unknown' ? engine : 'now running'}`}
+              </Button>
+            )}
             {role === 'checker' && !s.stamp && (
               <StampDialog submittalId={s.id} projectId={s.projectId} openErrors={openErrors} />
             )}
@@ -187,6 +204,21 @@ export function Component() {
         <Badge className={styles.stamp} appearance="outline" color="informative">
           Awaiting the checker's stamp
         </Badge>
+      )}
+      {(recheck.isPending || recheck.isError || recheck.data) && (
+        <Section title="Recheck with the current engine" labelId="recheck-heading">
+          {recheck.isPending ? (
+            <LoadingState label="Re-running the stored files…" />
+          ) : recheck.isError ? (
+            <ErrorState
+              error={recheck.error}
+              title="The recheck did not run"
+              onRetry={() => recheck.mutate()}
+            />
+          ) : (
+            recheck.data && <RecheckResult result={recheck.data} />
+          )}
+        </Section>
       )}
       <Section>
         {files.isPending ? (
