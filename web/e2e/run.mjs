@@ -342,6 +342,33 @@ try {
     await page.locator('.recharts-surface').first().waitFor();
     await shot('23-project-dark');
   });
+
+  await runner.step('rolled-shape members are drawn unfolded with their strips and junctions', async () => {
+    await signOut();
+    await signIn(PEOPLE.checker, `/projects/${projectId}/upload`);
+    const example = (name) => join(repoRoot, 'schema', 'examples', name);
+    await page
+      .getByTestId('calc-file-input')
+      .setInputFiles([example('lantern-hanger-wt.json'), example('lantern-brace-angle.json')]);
+    await page
+      .getByText(/^Valid · /)
+      .nth(1)
+      .waitFor();
+    await page.getByLabel('Submittal title').fill('Issue E — tee and W hangers, angle braces');
+    await page.getByRole('button', { name: /Upload 2 files and check/ }).click();
+    await page.getByTestId('upload-summary').waitFor({ timeout: 30_000 });
+    await page.getByRole('button', { name: 'Open the submittal' }).click();
+    const drawing = page.getByTestId('member-drawing');
+    await page.getByRole('tab', { name: /lantern-hanger-wt\.json/ }).click();
+    await drawing.getByText(/^stem · t = /).waitFor();
+    await shot('24-member-tee');
+    await page.getByRole('tab', { name: 'H-W1' }).click();
+    await drawing.getByText(/^web · t = /).waitFor();
+    await shot('25-member-w');
+    await page.getByRole('tab', { name: /lantern-brace-angle\.json/ }).click();
+    await drawing.getByText(/^leg-a · t = /).waitFor();
+    await shot('26-member-angle');
+  });
 } finally {
   if (consoleErrors.length > 0) runner.fail('no console errors', consoleErrors.join('\n    '));
   await browser.close();
