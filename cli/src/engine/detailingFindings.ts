@@ -87,6 +87,7 @@ export function detailingFindings(
   // LG203: a governing fracture line grazing a hole it does not deduct.
   const deducted = new Map(result.holeWidths.map((w, i) => [i, w.deducted] as const));
   const seen = new Set<string>();
+  const byId = new Map(holes.map((h) => [h.id, h] as const));
   for (const d of result.directions) {
     const chain = d.governing;
     if (!chain) continue;
@@ -95,7 +96,7 @@ export function detailingFindings(
     seen.add(key);
     const inChain = new Set(chain.holes);
     const points: Point[] = [];
-    const chainHoles = chain.holes.map((id) => holes.find((h) => h.id === id)!);
+    const chainHoles = chain.holes.map((id) => byId.get(id)!);
     const first = chainHoles[0]!;
     const last = chainHoles[chainHoles.length - 1]!;
     points.push({ x: first.x, y: 0 });
@@ -107,7 +108,11 @@ export function detailingFindings(
       const centre = { x: hole.x, y: hole.y };
       let distance = Number.POSITIVE_INFINITY;
       for (let s = 1; s < points.length; s += 1) {
-        distance = Math.min(distance, segmentDistance(points[s - 1]!, points[s]!, centre, centre));
+        const a = points[s - 1]!;
+        const b = points[s]!;
+        // A segment whose y-span stays a radius clear of the hole cannot graze it.
+        if (centre.y < Math.min(a.y, b.y) - radius || centre.y > Math.max(a.y, b.y) + radius) continue;
+        distance = Math.min(distance, segmentDistance(a, b, centre, centre));
       }
       if (distance < radius - eps) {
         findings.push(
