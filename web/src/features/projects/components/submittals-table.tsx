@@ -77,6 +77,7 @@ export function SubmittalsTable({ submittals }: SubmittalsTableProps) {
               <TableCell>
                 {s.stamp ? (
                   <Badge
+                    className={styles.badge}
                     appearance="tint"
                     color={s.stamp.action === 'no-exceptions-taken' ? 'success' : 'warning'}
                     icon={<ApprovalsAppRegular />}
