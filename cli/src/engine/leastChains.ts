@@ -4,6 +4,7 @@ import { EngineError } from './engineError.js';
 import { directionSign } from './fractureResiduals.js';
 import { gaugeLines } from './gaugeLines.js';
 import { layoutTolerance } from './layoutTolerance.js';
+import { rankedHoles } from './rankedHoles.js';
 import type { Chain, HoleLayout, LoadDirection } from './types.js';
 
 /** A path from the y = 0 edge to a hole; `cost` = Σ(−deducted) + Σ s²/4g so far. */
@@ -53,20 +54,7 @@ export function leastChains(layout: HoleLayout, direction: LoadDirection | null,
   const filter = direction !== null;
 
   // Work in rank order (sorted by y); the holes of a line occupy consecutive ranks.
-  const X = new Float64Array(n);
-  const Y = new Float64Array(n);
-  const W = new Float64Array(n);
-  const L = new Int32Array(n);
-  const lineEnd = new Int32Array(lines.lines.length);
-  lines.order.forEach((p, r) => {
-    const h = layout.holes[p]!;
-    X[r] = sign * h.x;
-    Y[r] = h.y;
-    W[r] = h.deducted;
-    L[r] = lines.line[p]!;
-    lineEnd[L[r]!] = r + 1;
-  });
-  const lineStart = (l: number): number => (l === 0 ? 0 : lineEnd[l - 1]!);
+  const { X, Y, W, L, lineEnd, lineStart } = rankedHoles(layout, lines, sign);
 
   // Node, first-leg and last-leg admissibility (all true without a direction).
   const nodeOk = new Uint8Array(n).fill(1);

@@ -4,6 +4,7 @@ import { directionSign, fractureResiduals } from './fractureResiduals.js';
 import { gaugeLines } from './gaugeLines.js';
 import { layoutTolerance } from './layoutTolerance.js';
 import { leastChains } from './leastChains.js';
+import { rankedHoles } from './rankedHoles.js';
 import type { HoleLayout, LoadDirection, ShareCheck } from './types.js';
 
 /** A path from the y = 0 edge to a hole: `loaded` fasteners passed on the loaded side so far. */
@@ -73,20 +74,7 @@ export function shareCheck(layout: HoleLayout, direction: LoadDirection): ShareC
   const lines = gaugeLines(layout);
   const eps = layoutTolerance(layout);
   const sign = directionSign(direction);
-  const X = new Float64Array(n);
-  const Y = new Float64Array(n);
-  const W = new Float64Array(n);
-  const L = new Int32Array(n);
-  const lineEnd = new Int32Array(lines.lines.length);
-  lines.order.forEach((p, r) => {
-    const h = layout.holes[p]!;
-    X[r] = sign * h.x;
-    Y[r] = h.y;
-    W[r] = h.deducted;
-    L[r] = lines.line[p]!;
-    lineEnd[L[r]!] = r + 1;
-  });
-  const lineStart = (l: number): number => (l === 0 ? 0 : lineEnd[l - 1]!);
+  const { X, Y, W, L, lineEnd, lineStart } = rankedHoles(layout, lines, sign);
 
   // Loaded-side fasteners at each hole's own line, before its line (first leg) and after it (last leg).
   const nodeCount = new Int32Array(n);
