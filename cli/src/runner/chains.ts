@@ -12,7 +12,7 @@ import type {
   MemberInput,
   RankedChain,
 } from '../engine/types.js';
-import { pickMember } from './member.js';
+import { engineFailure, pickMember } from './member.js';
 import type { Source } from './source.js';
 import type { RunOutcome } from './types.js';
 
@@ -87,20 +87,10 @@ export function runChains(source: Source, options: ChainsOptions): RunOutcome<Ch
       exitCode: 0,
     };
   } catch (err) {
-    const message = err instanceof Error ? err.message : String(err);
     return {
       result: {
         file: picked.file,
-        errors: [
-          {
-            file: picked.file,
-            pointer: `/members/${member.index}`,
-            line: 1,
-            column: 1,
-            rule: 'engine',
-            message,
-          },
-        ],
+        errors: [engineFailure(picked.file, member, err)],
         ...empty,
       },
       exitCode: 2,

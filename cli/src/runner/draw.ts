@@ -2,7 +2,7 @@
 import type { CalcError } from '../calc/types.js';
 import { analyseMember } from '../engine/index.js';
 import { buildDrawing, toSvg, type Drawing } from '../draw/index.js';
-import { pickMember } from './member.js';
+import { engineFailure, pickMember } from './member.js';
 import type { Source } from './source.js';
 import { CAUTION, type RunOutcome } from './types.js';
 import type { LoadDirection } from '../engine/types.js';
@@ -42,20 +42,10 @@ export function runDraw(source: Source, options: DrawRunOptions): RunOutcome<Dra
     });
     return { result: { file: picked.file, errors: [], drawing, svg: toSvg(drawing) }, exitCode: 0 };
   } catch (err) {
-    const message = err instanceof Error ? err.message : String(err);
     return {
       result: {
         file: picked.file,
-        errors: [
-          {
-            file: picked.file,
-            pointer: `/members/${member.index}`,
-            line: 1,
-            column: 1,
-            rule: 'engine',
-            message,
-          },
-        ],
+        errors: [engineFailure(picked.file, member, err)],
       },
       exitCode: 2,
     };

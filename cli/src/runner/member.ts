@@ -42,3 +42,18 @@ export function pickMember(source: Source, memberId: string | undefined): Picked
   }
   return { ok: true, file: loaded.file, document: doc, member };
 }
+
+/**
+ * The engine refused a member the loader accepted (a layout it cannot search, say): reported as an
+ * input error at the member, so the single-file runners exit 2 with one line instead of a stack trace.
+ */
+export function engineFailure(file: string, member: CalcMember, err: unknown): CalcError {
+  return {
+    file,
+    pointer: `/members/${member.index}`,
+    line: 1,
+    column: 1,
+    rule: 'engine',
+    message: err instanceof Error ? err.message : String(err),
+  };
+}
