@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
+import { HotReadsService } from '../database/hot-reads.service.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { ProjectMember } from '../projects/models/project-member.model.js';
 import { Project } from '../projects/models/project.model.js';
@@ -18,6 +19,7 @@ export class ProjectAccessService {
     @InjectModel(Submittal) private readonly submittals: typeof Submittal,
     @InjectModel(Discrepancy) private readonly discrepancies: typeof Discrepancy,
     @InjectModel(CalcFile) private readonly calcFiles: typeof CalcFile,
+    private readonly reads: HotReadsService,
   ) {}
 
   async projectOf(kind: ScopeKind, id: number): Promise<number | null> {
@@ -40,11 +42,10 @@ export class ProjectAccessService {
    * every project-scoped request). null when the project does not exist.
    */
   async projectMembership(projectId: number, userId: number): Promise<{ member: boolean } | null> {
-    const [rows] = await this.projects.sequelize!.query(
-      'SELECT EXISTS (SELECT 1 FROM project_members WHERE projectId = :projectId AND userId = :userId) AS member FROM projects WHERE id = :projectId',
-      { replacements: { projectId, userId } },
+    const row = await this.reads.get<{ member: number }>(
+      'SELECT EXISTS (SELECT 1 FROM project_members WHERE projectId = ?1 AND userId = ?2) AS member FROM projects WHERE id = ?1',
+      [projectId, userId],
     );
-    const row = (rows as { member: number }[])[0];
     return row ? { member: row.member === 1 } : null;
   }
 

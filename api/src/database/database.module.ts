@@ -1,11 +1,14 @@
-import { Module } from '@nestjs/common';
+import { Global, Module } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { SequelizeModule } from '@nestjs/sequelize';
 import { Transaction } from 'sequelize';
 import { databaseConfig } from '../config/index.js';
 import { DatabaseService } from './database.service.js';
+import { HotReadsService } from './hot-reads.service.js';
 import { MODELS } from './models.js';
 
+/** Global, like the Sequelize connection it opens: every module may read through HotReadsService. */
+@Global()
 @Module({
   imports: [
     SequelizeModule.forRootAsync({
@@ -22,7 +25,7 @@ import { MODELS } from './models.js';
       }),
     }),
   ],
-  providers: [DatabaseService],
-  exports: [DatabaseService],
+  providers: [DatabaseService, HotReadsService],
+  exports: [DatabaseService, HotReadsService],
 })
 export class DatabaseModule {}

@@ -1,5 +1,6 @@
 import { initialSchema } from './0001-initial-schema.js';
 import { discrepancySeverityIndex } from './0002-discrepancy-severity-index.js';
+import { discrepancyTallies } from './0003-discrepancy-tallies.js';
 
 /** Every migration, in order. Add new ones at the end; never edit one that has shipped. */
-export const migrations = [initialSchema, discrepancySeverityIndex];
+export const migrations = [initialSchema, discrepancySeverityIndex, discrepancyTallies];

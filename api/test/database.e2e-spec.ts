@@ -1,0 +1,97 @@
+import { getConnectionToken } from '@nestjs/sequelize';
+import type { Sequelize } from 'sequelize-typescript';
+import request from 'supertest';
+import { HotReadsService } from '../src/database/hot-reads.service.js';
+import { bearer, bootApp, EMAIL, login, type TestApp } from './helpers.js';
+
+let t: TestApp;
+let sequelize: Sequelize;
+let reads: HotReadsService;
+
+beforeAll(async () => {
+  t = await bootApp();
+  sequelize = t.app.get<Sequelize>(getConnectionToken());
+  reads = t.app.get(HotReadsService);
+});
+afterAll(async () => t.close());
+
+type Tally = {
+  projectId: number;
+  submittalId: number;
+  class: string;
+  severity: string;
+  status: string;
+  n: number;
+};
+const KEY = 'projectId, submittalId, class, severity, status';
+
+async function tallies(): Promise<{ kept: Tally[]; counted: Tally[] }> {
+  const [kept] = await sequelize.query(`SELECT ${KEY}, n FROM discrepancy_tallies ORDER BY ${KEY}`);
+  const [counted] = await sequelize.query(
+    `SELECT ${KEY}, COUNT(*) AS n FROM discrepancies GROUP BY ${KEY} ORDER BY ${KEY}`,
+  );
+  return { kept: kept as Tally[], counted: counted as Tally[] };
+}
+
+describe('discrepancy tallies (migration 0003)', () => {
+  it('match the rows after the demo seed', async () => {
+    const { kept, counted } = await tallies();
+    expect(counted.length).toBeGreaterThan(0);
+    expect(kept).toEqual(counted);
+  });
+
+  it('follow inserts, status moves, re-keying updates and deletes, whoever writes', async () => {
+    const [[row]] = (await sequelize.query('SELECT * FROM discrepancies ORDER BY id LIMIT 1')) as [
+      Record<string, unknown>[],
+      unknown,
+    ];
+    const cols = Object.keys(row as object).filter((c) => c !== 'id');
+    // Three copies: move one, re-class another, touch the third without its key, then delete two.
+    await sequelize.query(
+      `INSERT INTO discrepancies (${cols.join(', ')}) SELECT ${cols.join(', ')} FROM discrepancies
+       WHERE id = :id UNION ALL SELECT ${cols.join(', ')} FROM discrepancies WHERE id = :id
+       UNION ALL SELECT ${cols.join(', ')} FROM discrepancies WHERE id = :id`,
+      { replacements: { id: row?.id } },
+    );
+    const [copies] = (await sequelize.query('SELECT id FROM discrepancies ORDER BY id DESC LIMIT 3')) as [
+      { id: number }[],
+      unknown,
+    ];
+    const [a, b, c] = copies.map((x) => x.id);
+    await sequelize.query("UPDATE discrepancies SET status = 'waived' WHERE id = :a", {
+      replacements: { a },
+    });
+    await sequelize.query("UPDATE discrepancies SET class = 'detailing', severity = 'note' WHERE id = :b", {
+      replacements: { b },
+    });
+    await sequelize.query("UPDATE discrepancies SET message = 'unchanged key' WHERE id = :c", {
+      replacements: { c },
+    });
+    await sequelize.query('DELETE FROM discrepancies WHERE id IN (:ids)', { replacements: { ids: [a, c] } });
+    const { kept, counted } = await tallies();
+    expect(kept).toEqual(counted);
+    expect(kept.every((x) => x.n > 0)).toBe(true);
+  });
+});
+
+describe('the read connection', () => {
+  it('sees every committed write at once, with several statements prepared', async () => {
+    const name = () => reads.get<{ name: string }>('SELECT name FROM projects WHERE id = ?', [1]);
+    const count = () => reads.get<{ n: number }>('SELECT COUNT(*) AS n FROM events');
+    const before = (await name())?.name;
+    const events = (await count())?.n ?? 0;
+    await sequelize.transaction(async (transaction) => {
+      await sequelize.query("UPDATE projects SET name = name || ' (renamed)' WHERE id = 1", { transaction });
+    });
+    expect((await name())?.name).toBe(`${before} (renamed)`);
+    const admin = await login(t.http, EMAIL.admin);
+    await request(t.http).patch('/api/projects/1').set(bearer(admin)).send({ name: before }).expect(200);
+    expect((await name())?.name).toBe(before);
+    expect((await count())?.n).toBeGreaterThan(events);
+  });
+
+  it('is read-only and reports a bad statement as an error', async () => {
+    await expect(reads.all('DELETE FROM events')).rejects.toThrow(/readonly|read-only/i);
+    await expect(reads.all('SELECT nope FROM nowhere')).rejects.toThrow(/no such table/);
+  });
+});
