@@ -1,4 +1,5 @@
-import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Query, Res } from '@nestjs/common';
+import type { Response } from 'express';
 import { ApiBearerAuth, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -6,7 +7,6 @@ import { ProjectScope } from '../auth/decorators/project-scope.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { TokenAccess } from '../auth/decorators/token-access.decorator.js';
 import { Role } from '../auth/role.enum.js';
-import type { Page } from '../common/page.js';
 import { DiscrepanciesService } from './discrepancies.service.js';
 import {
   BulkResultDto,
@@ -14,7 +14,6 @@ import {
   CommentViewDto,
   CreateCommentDto,
   DiscrepancyDetailDto,
-  DiscrepancyDto,
   DiscrepancyPageDto,
   ListDiscrepanciesQuery,
   TransitionDto,
@@ -34,11 +33,13 @@ export class DiscrepanciesController {
       'Discrepancies of a project: filters (submittal, class, severity, status, member, code), sort, pages',
   })
   @ApiOkResponse({ type: DiscrepancyPageDto })
-  list(
+  async list(
     @Param('projectId', ParseIntPipe) projectId: number,
     @Query() query: ListDiscrepanciesQuery,
-  ): Promise<Page<DiscrepancyDto>> {
-    return this.discrepancies.list(projectId, query);
+    @Res() res: Response,
+  ): Promise<void> {
+    // The page arrives as JSON bytes built by SQLite (see DiscrepanciesService.list) and is sent as is.
+    res.type('application/json').send(await this.discrepancies.list(projectId, query));
   }
 
   @Post('projects/:projectId/discrepancies/bulk-transition')
