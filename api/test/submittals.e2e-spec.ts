@@ -290,10 +290,24 @@ describe('revision diff and recheck (seeded issue A → issue B)', () => {
     const kept = (res.body.kept as { previous: { code: string; memberId: string } }[]).map((k) =>
       key(k.previous),
     );
-    expect(closed).toEqual(expect.arrayContaining(['LG101 SP-N1', 'LG121 SP-N1', 'LG122 G-2', 'LG124 G-2']));
+    expect(closed).toEqual(
+      expect.arrayContaining(['LG101 SP-N1', 'LG121 SP-N1', 'LG122 G-2', 'LG124 G-2', 'LG142 B-L2']),
+    );
     expect(opened).toEqual(expect.arrayContaining(['LG101 T-1', 'LG102 T-1', 'LG103 T-1']));
     expect(kept).toEqual(expect.arrayContaining(['LG131 H-1', 'LG111 SP-S1']));
     expect(closed.filter((k) => kept.includes(k))).toEqual([]);
+  });
+
+  it('holds discrepancies of every finding class in the demo', async () => {
+    const { FINDING_CATALOGUE } = await import('ligament');
+    const classes = new Set<string>();
+    for (const submittalId of [1, 2]) {
+      const res = await request(t.http)
+        .get(`/api/projects/1/discrepancies?submittalId=${submittalId}&pageSize=500`)
+        .set(bearer(checker));
+      for (const d of res.body.items as { class: string }[]) classes.add(d.class);
+    }
+    expect([...classes].sort()).toEqual([...new Set(FINDING_CATALOGUE.map((f) => f.class))].sort());
   });
 
   it('answers 409 for the diff of a submittal that revises nothing', async () => {
