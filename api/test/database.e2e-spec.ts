@@ -90,6 +90,16 @@ describe('the read connection', () => {
     expect((await count())?.n).toBeGreaterThan(events);
   });
 
+  it('keeps answering while more distinct statements than it caches run at once', async () => {
+    // 200 texts against a cache of 64: statements are evicted while reads on them are in flight.
+    const texts = Array.from({ length: 200 }, (_, i) => `SELECT ${i} AS i, COUNT(*) AS n FROM users`);
+    const rows = await Promise.all(
+      [...texts, ...texts].map((sql) => reads.get<{ i: number; n: number }>(sql)),
+    );
+    expect(rows.map((r) => r?.i)).toEqual([...texts.keys(), ...texts.keys()]);
+    expect(new Set(rows.map((r) => r?.n)).size).toBe(1);
+  });
+
   it('is read-only and reports a bad statement as an error', async () => {
     await expect(reads.all('DELETE FROM events')).rejects.toThrow(/readonly|read-only/i);
     await expect(reads.all('SELECT nope FROM nowhere')).rejects.toThrow(/no such table/);

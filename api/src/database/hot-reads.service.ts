@@ -11,6 +11,13 @@ export type SqlValue = number | string | null;
 /** How many distinct statements stay prepared; the least recently used beyond this is finalised. */
 const STATEMENT_CACHE = 64;
 
+/** A cached statement and the reads running on it: an evicted one is finalised once they are done. */
+interface Prepared {
+  readonly statement: sqlite3.Statement;
+  uses: number;
+  evicted: boolean;
+}
+
 /**
  * The few reads every request makes (who is signed in, are they on this project, the discrepancy
  * list), run as cached prepared statements on a read-only connection of their own. An ORM query
@@ -24,7 +31,8 @@ const STATEMENT_CACHE = 64;
 @Injectable()
 export class HotReadsService implements OnApplicationShutdown {
   private db: Promise<sqlite3.Database> | null = null;
-  private readonly statements = new Map<string, sqlite3.Statement>();
+  /** Prepared statements by SQL text, in use order (least recent first). */
+  private readonly statements = new Map<string, Prepared>();
   private ownConnection = false;
 
   constructor(
@@ -42,47 +50,56 @@ export class HotReadsService implements OnApplicationShutdown {
    * transaction open, and every later read would see that old snapshot.
    */
   async all<T>(sql: string, params: readonly SqlValue[] = []): Promise<T[]> {
-    const statement = await this.statement(sql);
-    return new Promise((resolve, reject) =>
-      statement.all(params, (err: Error | null, rows: T[]) => (err ? reject(err) : resolve(rows))),
-    );
+    const prepared = await this.acquire(sql);
+    try {
+      return await new Promise<T[]>((resolve, reject) =>
+        prepared.statement.all(params, (err: Error | null, rows: T[]) => (err ? reject(err) : resolve(rows))),
+      );
+    } finally {
+      prepared.uses -= 1;
+      if (prepared.evicted && prepared.uses === 0) prepared.statement.finalize();
+    }
   }
 
   async onApplicationShutdown(): Promise<void> {
     const db = this.db;
     this.db = null;
-    const statements = [...this.statements.values()];
+    const idle = [...this.statements.values()];
     this.statements.clear();
-    await Promise.all(statements.map((s) => new Promise((resolve) => s.finalize(() => resolve(null)))));
+    for (const p of idle) p.evicted = true;
+    await Promise.all(
+      idle
+        .filter((p) => p.uses === 0)
+        .map((p) => new Promise((resolve) => p.statement.finalize(() => resolve(null)))),
+    );
     if (db && this.ownConnection) {
       const handle = await db.catch(() => null);
       if (handle) await new Promise((resolve) => handle.close(() => resolve(null)));
     }
   }
 
-  private async statement(sql: string): Promise<sqlite3.Statement> {
-    const cached = this.statements.get(sql);
-    if (cached) {
-      // Map order is use order: move it to the back.
-      this.statements.delete(sql);
-      this.statements.set(sql, cached);
-      return cached;
+  /** The prepared statement for `sql`, counted as in use until the caller's read ends. */
+  private async acquire(sql: string): Promise<Prepared> {
+    let prepared = this.statements.get(sql);
+    if (!prepared) {
+      const db = await this.connection();
+      const statement = await new Promise<sqlite3.Statement>((resolve, reject) => {
+        const s: sqlite3.Statement = db.prepare(sql, (err: Error | null) => (err ? reject(err) : resolve(s)));
+      });
+      // Two requests may have prepared the same text at once: keep the first, finalise the other.
+      prepared = this.statements.get(sql);
+      if (prepared) statement.finalize();
+      else prepared = { statement, uses: 0, evicted: false };
     }
-    const db = await this.connection();
-    const prepared = await new Promise<sqlite3.Statement>((resolve, reject) => {
-      const s: sqlite3.Statement = db.prepare(sql, (err: Error | null) => (err ? reject(err) : resolve(s)));
-    });
-    // Two requests may have prepared the same text at once: keep one, finalise the other.
-    const raced = this.statements.get(sql);
-    if (raced) {
-      prepared.finalize();
-      return raced;
-    }
+    // Map order is use order: (re)insert at the back, then evict the least recently used.
+    this.statements.delete(sql);
     this.statements.set(sql, prepared);
-    if (this.statements.size > STATEMENT_CACHE) {
-      const [oldest, statement] = this.statements.entries().next().value as [string, sqlite3.Statement];
+    prepared.uses += 1;
+    while (this.statements.size > STATEMENT_CACHE) {
+      const [oldest, victim] = this.statements.entries().next().value as [string, Prepared];
       this.statements.delete(oldest);
-      statement.finalize();
+      victim.evicted = true;
+      if (victim.uses === 0) victim.statement.finalize();
     }
     return prepared;
   }
