@@ -26,7 +26,8 @@ export const findingClassLabels: Record<FindingClass, string> = {
 
 /**
  * Chart and badge colours per class, as theme tokens. Colour is never the only signal: every use
- * also prints the class name.
+ * also prints the class name. Input (data missing from the calc file) has a hue of its own: a neutral
+ * grey read as "disabled" next to the other classes and turned pale in the dark theme.
  */
 export const findingClassColours: Record<FindingClass, string> = {
   overstated: tokens.colorPaletteRedBackground3,
@@ -36,11 +37,17 @@ export const findingClassColours: Record<FindingClass, string> = {
   'chain-width': tokens.colorPaletteMarigoldBackground3,
   'equal-share': tokens.colorPaletteBlueBorderActive,
   detailing: tokens.colorPaletteSteelBorderActive,
-  input: tokens.colorNeutralForeground3,
+  input: tokens.colorPalettePinkBorderActive,
 };
 
 export const severityLabels: Record<Severity, string> = { error: 'Error', warning: 'Warning', note: 'Note' };
 
 export function isFindingClass(value: string): value is FindingClass {
   return (FINDING_CLASSES as readonly string[]).includes(value);
+}
+
+/** Position of a class in the reading order; unknown keys go last (for chart legends and tooltips). */
+export function findingClassRank(value: unknown): number {
+  const index = FINDING_CLASSES.indexOf(value as FindingClass);
+  return index === -1 ? FINDING_CLASSES.length : index;
 }

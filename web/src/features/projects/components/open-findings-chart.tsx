@@ -1,7 +1,12 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import type { FindingClass } from 'ligament/engine';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import { FINDING_CLASSES, findingClassColours, findingClassLabels } from '@/lib/finding-classes';
+import {
+  FINDING_CLASSES,
+  findingClassColours,
+  findingClassLabels,
+  findingClassRank,
+} from '@/lib/finding-classes';
 
 const useStyles = makeStyles({
   chart: {
@@ -53,8 +58,11 @@ export function OpenFindingsChart({ revisions, summary }: OpenFindingsChartProps
               color: tokens.colorNeutralForeground1,
             }}
             labelStyle={{ color: tokens.colorNeutralForeground1, fontWeight: 600 }}
+            itemSorter={(item) => findingClassRank(item.dataKey)}
           />
+          {/* Legend and tooltip follow the class chips' reading order, not recharts' alphabetical default. */}
           <Legend
+            itemSorter={(item) => findingClassRank(item.dataKey)}
             formatter={(value: string) => (
               <span style={{ color: tokens.colorNeutralForeground2 }}>{value}</span>
             )}
