@@ -3,7 +3,8 @@
 // refused a broken one), reads the discrepancies and makes a move; a consultant answers one and makes
 // a CI token and answers another by linking a revision; the checker accepts, stamps and rechecks with the
 // current engine and reads the project activity; the owner's rep sees the dashboard change. Any console
-// error fails the run. Screenshots of every screen go to e2e/artifacts/.
+// error fails the run. At 1440 and 1920 px the discrepancy list and its detail must sit side by side.
+// Screenshots of every screen go to e2e/artifacts/.
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { artifacts, createRunner, launchBrowser, repoRoot, startServer, webRoot } from './harness.mjs';
@@ -368,6 +369,55 @@ try {
     await page.getByRole('tab', { name: /lantern-brace-angle\.json/ }).click();
     await drawing.getByText(/^leg-a · t = /).waitFor();
     await shot('26-member-angle');
+  });
+
+  await runner.step('at 1440 and 1920 px the discrepancy list and its detail sit side by side', async () => {
+    // Still the checker from the step before; back to the light theme the screenshots are compared in.
+    const light = page.getByRole('button', { name: 'Use the light theme' });
+    if (await light.count()) await light.click();
+    for (const [width, height] of [
+      [1440, 900],
+      [1920, 1080],
+    ]) {
+      await page.setViewportSize({ width, height });
+      await go(`/discrepancies?projectId=${projectId}`);
+      await page
+        .getByTestId('discrepancy-row')
+        .first()
+        .getByRole('button', { name: /Open .* details/ })
+        .click();
+      const aside = page.getByRole('complementary', { name: 'Discrepancy details' });
+      await aside.getByTestId('discrepancy-detail').waitFor();
+      const list = await page.getByRole('grid', { name: 'Discrepancies' }).boundingBox();
+      const detail = await aside.boundingBox();
+      expect(list && detail, `both regions have boxes at ${width} px`);
+      const gap = detail.x - (list.x + list.width);
+      expect(gap > 0, `the detail starts right of the list at ${width} px (gap ${gap})`);
+      expect(
+        detail.y < list.y + list.height && list.y < detail.y + detail.height,
+        `the two share the same rows of the screen at ${width} px`,
+      );
+      expect(detail.x + detail.width <= width, `the detail is not clipped at the right at ${width} px`);
+      const scrollWidth = await page.evaluate(() => document.documentElement.scrollWidth);
+      expect(scrollWidth <= width, `no sideways scroll at ${width} px (${scrollWidth})`);
+      // The page margins do not swallow a wide screen: list and detail fill nine tenths of it.
+      expect(
+        detail.x + detail.width - list.x > 0.9 * width - 80,
+        `the workspace uses the width at ${width} px`,
+      );
+      await page.mouse.move(1, 1);
+      await page.screenshot({ path: join(artifacts, `27-discrepancies-${width}.png`) });
+      // Scrolled down the long list, the detail stays in view.
+      await page.mouse.wheel(0, 900);
+      await page.waitForFunction(() => window.scrollY > 0);
+      const stuck = await aside.boundingBox();
+      expect(
+        stuck && stuck.y >= 0 && stuck.y < 40,
+        `the detail stays at the top while the list scrolls (${stuck?.y})`,
+      );
+      await page.evaluate(() => window.scrollTo(0, 0));
+    }
+    await page.setViewportSize({ width: 1280, height: 860 });
   });
 } finally {
   if (consoleErrors.length > 0) runner.fail('no console errors', consoleErrors.join('\n    '));

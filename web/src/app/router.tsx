@@ -4,7 +4,7 @@ import { paths } from '@/config/paths';
 import { setUnauthorizedHandler } from '@/lib/api-client';
 import type { Role } from '@/lib/session';
 import { HomeRedirect } from './home-redirect';
-import { AppShell } from './layout/app-shell';
+import { AppShell, type ShellHandle } from './layout/app-shell';
 import { NotFound } from './not-found';
 import { RequireRole } from './require-role';
 import { RouteError } from './route-error';
@@ -63,6 +63,7 @@ export const router = createBrowserRouter([
       { path: paths.report.path, lazy: guarded(() => import('@/features/submittals/routes/report')) },
       {
         path: paths.discrepancies.path,
+        handle: { layout: 'workspace' } satisfies ShellHandle,
         lazy: guarded(() => import('@/features/discrepancies/routes/discrepancies')),
       },
       {

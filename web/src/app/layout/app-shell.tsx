@@ -3,6 +3,7 @@ import {
   Button,
   makeStyles,
   Menu,
+  mergeClasses,
   MenuItem,
   MenuList,
   MenuPopover,
@@ -14,7 +15,7 @@ import {
 } from '@fluentui/react-components';
 import { SignOutRegular, WeatherMoonRegular, WeatherSunnyRegular } from '@fluentui/react-icons';
 import { Suspense } from 'react';
-import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { NavLink, Outlet, useMatches, useNavigate } from 'react-router-dom';
 import { LogoMark } from '@/components/logo-mark';
 import { LoadingState } from '@/components/states';
 import { CAUTION } from '@/config/caution';
@@ -98,6 +99,8 @@ const useStyles = makeStyles({
     '@media (max-width: 900px)': { padding: `${tokens.spacingVerticalL} ${tokens.spacingHorizontalM}` },
     ':focus': { outlineStyle: 'none' },
   },
+  // A workspace page (list beside detail) takes the width of a wide screen instead of leaving it empty.
+  mainWorkspace: { maxWidth: '2200px' },
   footer: {
     borderTop: `${tokens.strokeWidthThin} solid ${tokens.colorNeutralStroke2}`,
     backgroundColor: tokens.colorNeutralBackground1,
@@ -110,6 +113,15 @@ const useStyles = makeStyles({
   },
 });
 
+/** What a route may tell the shell through its `handle`. */
+export interface ShellHandle {
+  readonly layout?: 'page' | 'workspace';
+}
+
+function useWorkspaceLayout(): boolean {
+  return useMatches().some((m) => (m.handle as ShellHandle | undefined)?.layout === 'workspace');
+}
+
 /** Header with the mark and the role's navigation, the page, and the footer carrying the caution. */
 export function AppShell() {
   const styles = useStyles();
@@ -117,6 +129,7 @@ export function AppShell() {
   const navigate = useNavigate();
   const serverInfo = useServerInfo();
   const { choice, toggle } = useThemeChoice();
+  const workspace = useWorkspaceLayout();
   const role = session?.user.role;
   const demo = serverInfo.data?.demo === true;
   const items = navItems.filter((item) => role && item.roles.includes(role) && (!item.demoOnly || demo));
@@ -193,7 +206,7 @@ export function AppShell() {
           )}
         </div>
       </header>
-      <main id="main" className={styles.main} tabIndex={-1}>
+      <main id="main" className={mergeClasses(styles.main, workspace && styles.mainWorkspace)} tabIndex={-1}>
         <Suspense fallback={<LoadingState />}>
           <Outlet />
         </Suspense>

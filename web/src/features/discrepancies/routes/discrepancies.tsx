@@ -31,7 +31,9 @@ const useStyles = makeStyles({
     gap: tokens.spacingHorizontalL,
     alignItems: 'start',
   },
-  layoutWithDetail: { gridTemplateColumns: 'minmax(0, 1fr) minmax(360px, 420px)' },
+  // The detail grows with the screen (30 % of the workspace, 380–560 px) so a wide screen gives the
+  // comments and history room instead of leaving it empty at the sides.
+  layoutWithDetail: { gridTemplateColumns: 'minmax(0, 1fr) clamp(380px, 30%, 560px)' },
   detail: {
     position: 'sticky',
     top: tokens.spacingVerticalL,
@@ -268,9 +270,9 @@ export function Component() {
           )}
         </Section>
         {open && wide && (
-          <div className={styles.detail}>
+          <aside className={styles.detail} aria-label="Discrepancy details" data-testid="discrepancy-aside">
             <Section>{detailPanel}</Section>
-          </div>
+          </aside>
         )}
       </div>
       {open && !wide && (
