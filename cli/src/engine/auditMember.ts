@@ -1,6 +1,7 @@
 import type { AuditOptions, CalcMember, ClaimedChain, MemberAudit, MemberClaims } from '../calc/types.js';
 import { analyseMember } from './analyseMember.js';
 import { detailingFindings } from './detailingFindings.js';
+import { grazingFindings } from './grazingFindings.js';
 import { formatDirection } from './formatDirection.js';
 import { formatQuantity, type Dimension } from './formatQuantity.js';
 import { inspectLayout } from './inspectLayout.js';
@@ -364,6 +365,8 @@ export function auditMember(
 
   if (profile.standard === 'EN 1993-1-1' || profile.standard === 'CSA S16-19') {
     findings.push(...profileDetailingFindings(member, profile, result, base));
+    // The grazing check is geometric, not a code rule: made under every profile.
+    findings.push(...grazingFindings(member, profile, result, base));
   } else if (member.section) {
     findings.push(...sectionDetailingFindings(member, profile, result, base));
   } else {

@@ -1,8 +1,7 @@
-import { formatDirection } from './formatDirection.js';
 import { formatQuantity } from './formatQuantity.js';
+import { grazingFindings } from './grazingFindings.js';
 import { makeFinding } from './makeFinding.js';
 import { minimumEdgeDistance } from './minimumEdgeDistance.js';
-import { segmentDistance, type Point } from './segmentDistance.js';
 import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js';
 
 /**
@@ -12,7 +11,7 @@ import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js
  *   J3.4M. Edge distance along the load needs the plate ends, which calc files do not carry, so it is
  *   not checked; nor are the Table J3.5 increments for oversized and slotted holes;
  * - LG203: the fracture line of a governing chain passing within a hole's radius (deducted width / 2)
- *   of a hole it does not deduct.
+ *   of a hole it does not deduct ({@link grazingFindings}).
  * Holes given only by an explicit dimension (no bolt) are skipped for LG201 and LG202.
  *
  * @param member - the member
@@ -85,50 +84,6 @@ export function detailingFindings(
   });
 
   // LG203: a governing fracture line grazing a hole it does not deduct.
-  const deducted = new Map(result.holeWidths.map((w, i) => [i, w.deducted] as const));
-  const seen = new Set<string>();
-  const byId = new Map(holes.map((h) => [h.id, h] as const));
-  for (const d of result.directions) {
-    const chain = d.governing;
-    if (!chain) continue;
-    const key = chain.holes.join('\u0000');
-    if (seen.has(key)) continue;
-    seen.add(key);
-    const inChain = new Set(chain.holes);
-    const points: Point[] = [];
-    const chainHoles = chain.holes.map((id) => byId.get(id)!);
-    const first = chainHoles[0]!;
-    const last = chainHoles[chainHoles.length - 1]!;
-    points.push({ x: first.x, y: 0 });
-    for (const h of chainHoles) points.push({ x: h.x, y: h.y });
-    points.push({ x: last.x, y: member.width });
-    holes.forEach((hole, i) => {
-      if (inChain.has(hole.id)) return;
-      const radius = (deducted.get(i) ?? 0) / 2;
-      const centre = { x: hole.x, y: hole.y };
-      let distance = Number.POSITIVE_INFINITY;
-      for (let s = 1; s < points.length; s += 1) {
-        const a = points[s - 1]!;
-        const b = points[s]!;
-        // A segment whose y-span stays a radius clear of the hole cannot graze it.
-        if (centre.y < Math.min(a.y, b.y) - radius || centre.y > Math.max(a.y, b.y) + radius) continue;
-        distance = Math.min(distance, segmentDistance(a, b, centre, centre));
-      }
-      if (distance < radius - eps) {
-        findings.push(
-          makeFinding('LG203', {
-            memberId: member.id,
-            direction: d.direction,
-            chain: chain.holes,
-            holes: [hole.id],
-            claimed: distance,
-            recomputed: radius,
-            message: `The governing fracture line (chain ${chain.holes.join('-')}, ${formatDirection(d.direction)}) passes ${formatQuantity(distance, 'length', u)} from the centre of hole ${hole.id}, within its radius ${formatQuantity(radius, 'length', u)}`,
-            pointer: `${memberPointer}/holes/${i}`,
-          }),
-        );
-      }
-    });
-  }
+  findings.push(...grazingFindings(member, profile, result, memberPointer));
   return findings;
 }

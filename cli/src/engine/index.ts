@@ -26,6 +26,7 @@ export { shareCheck } from './shareCheck.js';
 export { analyseMember } from './analyseMember.js';
 export { inspectLayout } from './inspectLayout.js';
 export { detailingFindings } from './detailingFindings.js';
+export { grazingFindings } from './grazingFindings.js';
 export { withinTolerance, DEFAULT_TOLERANCE, type ToleranceSpec } from './withinTolerance.js';
 export { formatQuantity, type Dimension } from './formatQuantity.js';
 export { formatDirection } from './formatDirection.js';

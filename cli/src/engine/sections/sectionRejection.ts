@@ -1,4 +1,5 @@
 import { chainLegPairs } from './chainLegPairs.js';
+import { sectionLineAt } from './sectionLinePoint.js';
 import type { LoadDirection } from '../types.js';
 import type { SectionChainRejection, SectionLayout } from './types.js';
 
@@ -25,7 +26,6 @@ export function sectionRejection(
   direction: LoadDirection,
 ): SectionChainRejection | null {
   const holes = layout.holes;
-  const D = layout.gauges;
   const eps = layout.tolerance;
   const sign = direction === '-x' ? 1 : -1;
   const inChain = new Set(chain);
@@ -34,21 +34,7 @@ export function sectionRejection(
   for (const p of order) {
     if (inChain.has(p)) continue;
     const h = holes[p]!;
-    let lineX = holes[chain[0]!]!.x;
-    let best = Number.POSITIVE_INFINITY;
-    let bestOwn = false;
-    for (const [a, b] of legs) {
-      const dab = D[a]![b]!;
-      // In a tree metric, the distance from h to the path a–b, and where h projects onto it.
-      const off = (D[p]![a]! + D[p]![b]! - dab) / 2;
-      const own = holes[a]!.element === h.element && holes[b]!.element === h.element;
-      if (off < best - eps || (Math.abs(off - best) <= eps && own && !bestOwn)) {
-        best = off;
-        bestOwn = own;
-        const along = Math.min(dab, Math.max(0, (D[a]![p]! + dab - D[b]![p]!) / 2));
-        lineX = holes[a]!.x + ((holes[b]!.x - holes[a]!.x) * along) / dab;
-      }
-    }
+    const lineX = sectionLineAt(layout, chain, legs, p).x;
     const residual = sign * (h.x - lineX);
     if (residual > eps) continue;
     return { direction, blockingHole: h.id, reason: residual < -eps ? 'loaded-side' : 'on-line' };
