@@ -95,7 +95,8 @@ function fromProfile(s: ProfileStrength): Strength {
  *
  * Members with a `section` (angles, tees, W-shapes, channels) are unfolded and searched as connected
  * flat elements (sections/README.md); Ag is the tabulated value when given. U comes from
- * {@link memberShearLag}. Under EN 1993-1-1 and CSA S16-19 hole widths, net area rule and strengths
+ * {@link memberShearLag}; when it names another net area for U (EN 1993-1-8 3.10.3(2), an unequal angle
+ * bolted through its smaller leg), Ae is that area · U. Under EN 1993-1-1 and CSA S16-19 hole widths, net area rule and strengths
  * come from the code's profile (EN: Npl,Rd = A fy/γM0, Nu,Rd = 0.9 Anet fu/γM2 or 3.10.3 for angles;
  * CSA: Tr = φ Ag Fy, φu Ane Fu); the 0.85 Ag cap is AISC 360 J4.1's and applies only there. With
  * block-shear input the governing tear-out is reported beside the tensile strengths
@@ -163,7 +164,8 @@ export function analyseMember(
   }
   const shearLag = memberShearLag(member, profile, An, sectionLayout);
   const U = shearLag?.U ?? 1.0;
-  const uncapped = An * U;
+  // EN 1993-1-8 3.10.3(2): an unequal angle bolted through its smaller leg takes β on another Anet.
+  const uncapped = (shearLag?.netArea?.area ?? An) * U;
   const tension = tensionProfileOf(profile);
   const cap =
     !tension && (member.kind === 'splice-plate' || member.kind === 'gusset')

@@ -36,8 +36,10 @@ function notApplicable(why: string): MemberShearLag {
  * - CSA S16-19 12.3.3.2: Ane = factor · An, the factor reported as U (angles 0.80 with 4 or more
  *   transverse lines, 0.60 with fewer; W flanges 0.90/0.85; others 0.85/0.75);
  * - EN 1993-1-8 3.10.3: an angle connected by one leg takes β2 or β3 (interpolated on p1) as U, so
- *   Nu,Rd = β·Anet·fu/γM2; for one bolt U = 2.0(e2 − 0.5 d0)t / Anet. Other EN members: U = 1 (6.2.3
- *   (6.7) has its own 0.9).
+ *   Nu,Rd = β·Anet·fu/γM2; for one bolt U = 2.0(e2 − 0.5 d0)t / Anet. An unequal-leg angle bolted
+ *   through its smaller leg (2 or more bolts, every hole in that leg) takes Anet of the equivalent
+ *   equal-leg angle of the smaller leg's size (3.10.3(2)), reported in `netArea`: Ae = netArea·β.
+ *   Other EN members: U = 1 (6.2.3 (6.7) has its own 0.9).
  * A plate without connection data takes U = 1.0 (Table D3.1 case 1) and reports nothing; a section
  * without either U or connection data, or with data no rule applies to, takes U = 1.0 and says why
  * (finding LG142).
@@ -100,6 +102,15 @@ export function memberShearLag(
       return notApplicable('EN 1993-1-8 3.10.3 needs the number of bolts in the row');
     const pieces = layout.section.pieces;
     const element = layout.section.elements.find((e) => e.id === first.element)!;
+    // EN 1993-1-8 3.10.3(2) needs the leg sizes when every hole is in one leg: the connected one and
+    // the outstanding one.
+    const oneLeg = connected.every((h) => h.element === first.element);
+    const legs =
+      oneLeg && section.a !== undefined && section.b !== undefined
+        ? first.element === 'leg-a'
+          ? { connected: section.a, outstanding: section.b }
+          : { connected: section.b, outstanding: section.a }
+        : undefined;
     const p1 = holeSpacings(
       connected.map((h) => ({ x: h.x, y: h.u })),
       element.span,
@@ -116,15 +127,23 @@ export function memberShearLag(
         ...(p1 !== undefined ? { p1 } : {}),
         e2: element.span - first.u,
         gammaM2,
+        ...(legs ? { legs } : {}),
       });
-      const U = (r.NuRd * 1000 * gammaM2) / (perPiece * member.material.Fu);
+      const used = r.Anet ?? perPiece;
+      const U = (r.NuRd * 1000 * gammaM2) / (used * member.material.Fu);
+      const basis =
+        r.beta === null
+          ? `one bolt: Nu,Rd = 2.0(e2 − 0.5 d0) t fu / γM2, U = ${r3(U)}`
+          : `${n} bolts at p1 = ${r3(p1 ?? 0)}: β = ${r3(r.beta)}`;
+      if (r.equivalentLeg === undefined || !legs) return { U, rule: 'EN 1993-1-8 3.10.3', basis };
+      const t = first.thickness;
+      const each = pieces > 1 ? ' per angle' : '';
+      const equivalent = `Anet of the equivalent equal-leg angle ${r3(legs.connected)} × ${r3(legs.connected)} × ${r3(t)}: ${r3(perPiece)} − (${r3(legs.outstanding)} − ${r3(legs.connected)}) × ${r3(t)} = ${r3(used)}${each}`;
       return {
         U,
         rule: 'EN 1993-1-8 3.10.3',
-        basis:
-          r.beta === null
-            ? `one bolt: Nu,Rd = 2.0(e2 − 0.5 d0) t fu / γM2, U = ${r3(U)}`
-            : `${n} bolts at p1 = ${r3(p1 ?? 0)}: β = ${r3(r.beta)}`,
+        basis: `${basis}, on the ${equivalent} (unequal-leg angle connected by its smaller leg, 3.10.3(2))`,
+        netArea: { area: used * pieces, clause: 'EN 1993-1-8 3.10.3(2)', basis: equivalent },
       };
     } catch (err) {
       if (err instanceof ProfileError) return notApplicable(err.message.replace(/^[^:]*: /, ''));

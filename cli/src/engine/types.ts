@@ -294,6 +294,12 @@ export interface MemberShearLag {
   readonly basis: string;
   /** Set when no rule applied to the connection data given: U was taken as 1.0 (LG142). */
   readonly notApplicable?: string;
+  /**
+   * The net area U multiplies when the rule says it is not the member's An (all pieces): for an EN
+   * unequal-leg angle connected by its smaller leg, that of the equivalent equal-leg angle
+   * (EN 1993-1-8 3.10.3(2)). Then Ae = area · U; absent, Ae = An · U.
+   */
+  readonly netArea?: { readonly area: number; readonly clause: string; readonly basis: string };
 }
 
 /** Block shear areas and strength of one tear-out (all elements and pieces torn out together). */

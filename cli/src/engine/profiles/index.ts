@@ -7,7 +7,7 @@ export { CSA_S16_19, csaS16Profile } from './csaS16Profile.js';
 export { csaS16TensionResistance } from './csaS16TensionResistance.js';
 export type { CsaS16Factors } from './csaS16TensionResistance.js';
 export { en1993AngleOneLeg } from './en1993AngleOneLeg.js';
-export type { En1993AngleInput } from './en1993AngleOneLeg.js';
+export type { En1993AngleInput, En1993AngleResult } from './en1993AngleOneLeg.js';
 export { en1993Detailing } from './en1993Detailing.js';
 export { en1993HoleDiameter } from './en1993HoleDiameter.js';
 export { en1993HoleWidth } from './en1993HoleWidth.js';

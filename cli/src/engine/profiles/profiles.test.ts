@@ -80,6 +80,39 @@ describe('EN 1993-1-1 profile', () => {
     expect(() => en1993AngleOneLeg({ bolts: 2, d0: 22, t: 10, fu: 430 })).toThrow(/Anet and p1/);
   });
 
+  it('EN 1993-1-8:2005 3.10.3(2): an unequal angle connected by its smaller leg takes Anet of the equivalent equal-leg angle', () => {
+    // L120×80×12, Anet 2006 mm² as it is (R7), three bolts, d0 22, p1 82.5 = 3.75 d0 → β3 = 0.6
+    // (Table 3.8, from memory). Smaller leg connected: equivalent L80×80×12, the outstanding leg
+    // 40 mm shorter: Anet = 2006 − (120 − 80)·12 = 1526 mm²; Nu,Rd = 0.6·1526·360/1.25 = 263.69 kN.
+    const base = { bolts: 3, d0: 22, t: 12, fu: 360, Anet: 2006, p1: 82.5 };
+    const smaller = en1993AngleOneLeg({ ...base, legs: { connected: 80, outstanding: 120 } });
+    expect(smaller).toEqual({
+      NuRd: expect.any(Number),
+      beta: expect.any(Number),
+      Anet: 1526,
+      equivalentLeg: 80,
+    });
+    expect(smaller.NuRd).toBeCloseTo((0.6 * 1526 * 360) / 1.25 / 1000, 9);
+    // Larger leg connected, or an equal angle: Anet as it is, 0.6·2006·360/1.25 = 346.64 kN.
+    for (const legs of [{ connected: 120, outstanding: 80 }, { connected: 80, outstanding: 80 }, undefined]) {
+      const r = en1993AngleOneLeg({ ...base, ...(legs ? { legs } : {}) });
+      expect(r.Anet).toBe(2006);
+      expect(r.equivalentLeg).toBeUndefined();
+      expect(r.NuRd).toBeCloseTo((0.6 * 2006 * 360) / 1.25 / 1000, 9);
+    }
+    // One bolt: (3.11) has no Anet, so the rule changes nothing.
+    expect(
+      en1993AngleOneLeg({
+        bolts: 1,
+        d0: 22,
+        t: 12,
+        fu: 360,
+        e2: 40,
+        legs: { connected: 80, outstanding: 120 },
+      }).Anet,
+    ).toBeNull();
+  });
+
   it('EN 1993-1-8 Table 3.3 (published): e1, e2 ≥ 1.2 d0, p1 ≥ 2.2 d0, p2 ≥ 2.4 d0, e ≤ 4t + 40, p ≤ min(14t, 200)', () => {
     const d0 = 22;
     const limits = en1993Detailing({ d0, t: 10, e1: 26, e2: 26, p1: 48, p2: 52, eMax: 81, pMax: 141 }).map(
