@@ -316,6 +316,13 @@ try {
     await signIn(PEOPLE.admin, '/admin');
     await page.getByRole('table', { name: 'Users' }).waitFor();
     await shot('18-admin-users');
+    await page.getByRole('tab', { name: 'Invitations' }).click();
+    await page.getByRole('form', { name: 'Invite someone' }).waitFor();
+    await page
+      .getByRole('table', { name: 'Invitations' })
+      .or(page.getByText('No invitations sent'))
+      .waitFor();
+    await shot('18b-admin-invitations');
     await page.getByRole('tab', { name: 'Projects and members' }).click();
     await page.getByRole('table', { name: 'Project members' }).waitFor();
     await shot('19-admin-projects');

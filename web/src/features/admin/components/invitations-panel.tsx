@@ -1,20 +1,6 @@
-import {
-  Button,
-  Dropdown,
-  Field,
-  Input,
-  makeStyles,
-  Option,
-  Table,
-  TableBody,
-  TableCell,
-  TableHeader,
-  TableHeaderCell,
-  TableRow,
-  tokens,
-} from '@fluentui/react-components';
+import { Field, Input } from '@fluentui/react-components';
 import { useState } from 'react';
-import { EmptyState, ErrorState, LoadingState } from '@/components/states';
+import type { Schema } from '@/lib/api-schemas';
 import { formatDateTime } from '@/lib/format';
 import {
   createInvitationInputSchema,
@@ -23,21 +9,25 @@ import {
 } from '../api/create-invitation';
 import { useInvitations } from '../api/get-invitations';
 import { useOrganisations } from '../api/get-organisations';
-import { ROLE_OPTIONS } from './roles';
+import { AdminForm, issuesByField, OrganisationField, RoleDropdown } from './admin-form';
+import { AdminTable, type AdminColumn } from './admin-table';
 
-const useStyles = makeStyles({
-  form: {
-    display: 'grid',
-    gridTemplateColumns: 'repeat(auto-fit, minmax(180px, 1fr))',
-    gap: tokens.spacingHorizontalM,
-    alignItems: 'end',
-    marginBottom: tokens.spacingVerticalL,
-  },
-  wrap: { overflowX: 'auto' },
-});
+type Invitation = Schema<'InvitationDto'>;
+
+function invitationState(i: Invitation): string {
+  if (i.acceptedAt) return `accepted ${formatDateTime(i.acceptedAt)}`;
+  return new Date(i.expiresAt) < new Date() ? 'expired' : `waiting, until ${formatDateTime(i.expiresAt)}`;
+}
+
+const columns: AdminColumn<Invitation>[] = [
+  { id: 'name', header: 'Name', cell: (i) => i.name },
+  { id: 'email', header: 'E-mail', cell: (i) => i.email },
+  { id: 'role', header: 'Role', cell: (i) => i.role },
+  { id: 'sent', header: 'Sent', cell: (i) => formatDateTime(i.createdAt) },
+  { id: 'state', header: 'State', cell: invitationState },
+];
 
 export function InvitationsPanel() {
-  const styles = useStyles();
   const invitations = useInvitations();
   const organisations = useOrganisations();
   const create = useCreateInvitation();
@@ -52,9 +42,7 @@ export function InvitationsPanel() {
   const submit = () => {
     const parsed = createInvitationInputSchema.safeParse(form);
     if (!parsed.success) {
-      const next: Record<string, string> = {};
-      for (const issue of parsed.error.issues) next[String(issue.path[0])] ??= issue.message;
-      setErrors(next);
+      setErrors(issuesByField(parsed.error));
       return;
     }
     setErrors({});
@@ -63,7 +51,12 @@ export function InvitationsPanel() {
 
   return (
     <>
-      <div className={styles.form}>
+      <AdminForm
+        label="Invite someone"
+        submitLabel="Send invitation"
+        pending={create.isPending}
+        onSubmit={submit}
+      >
         <Field label="Name" required validationMessage={errors.name}>
           <Input value={form.name} onChange={(_, d) => setForm({ ...form, name: d.value })} />
         </Field>
@@ -71,78 +64,22 @@ export function InvitationsPanel() {
           <Input type="email" value={form.email} onChange={(_, d) => setForm({ ...form, email: d.value })} />
         </Field>
         <Field label="Role" required>
-          <Dropdown
-            value={ROLE_OPTIONS.find((r) => r.value === form.role)?.label ?? ''}
-            selectedOptions={[form.role]}
-            onOptionSelect={(_, d) =>
-              setForm({ ...form, role: d.optionValue as CreateInvitationInput['role'] })
-            }
-          >
-            {ROLE_OPTIONS.map((r) => (
-              <Option key={r.value} value={r.value}>
-                {r.label}
-              </Option>
-            ))}
-          </Dropdown>
+          <RoleDropdown value={form.role} onChange={(role) => setForm({ ...form, role })} />
         </Field>
-        <Field label="Firm">
-          <Dropdown
-            placeholder="None"
-            value={organisations.data?.find((o) => o.id === form.organisationId)?.name ?? ''}
-            selectedOptions={form.organisationId ? [String(form.organisationId)] : []}
-            onOptionSelect={(_, d) =>
-              setForm({ ...form, organisationId: d.optionValue ? Number(d.optionValue) : undefined })
-            }
-          >
-            {(organisations.data ?? []).map((o) => (
-              <Option key={o.id} value={String(o.id)}>
-                {o.name}
-              </Option>
-            ))}
-          </Dropdown>
-        </Field>
-        <Button appearance="primary" onClick={submit} disabled={create.isPending}>
-          Send invitation
-        </Button>
-      </div>
-      {invitations.isPending ? (
-        <LoadingState />
-      ) : invitations.isError ? (
-        <ErrorState error={invitations.error} />
-      ) : invitations.data.length === 0 ? (
-        <EmptyState title="No invitations sent" />
-      ) : (
-        <div className={styles.wrap}>
-          <Table aria-label="Invitations">
-            <TableHeader>
-              <TableRow>
-                <TableHeaderCell>Name</TableHeaderCell>
-                <TableHeaderCell>E-mail</TableHeaderCell>
-                <TableHeaderCell>Role</TableHeaderCell>
-                <TableHeaderCell>Sent</TableHeaderCell>
-                <TableHeaderCell>State</TableHeaderCell>
-              </TableRow>
-            </TableHeader>
-            <TableBody>
-              {invitations.data.map((i) => (
-                <TableRow key={i.id}>
-                  <TableCell>{i.name}</TableCell>
-                  <TableCell>{i.email}</TableCell>
-                  <TableCell>{i.role}</TableCell>
-                  <TableCell>{formatDateTime(i.createdAt)}</TableCell>
-                  <TableCell>
-                    {i.acceptedAt
-                      ? `accepted ${formatDateTime(i.acceptedAt)}`
-                      : new Date(i.expiresAt) < new Date()
-                        ? 'expired'
-                        : `waiting, until ${formatDateTime(i.expiresAt)}`}
-                  </TableCell>
-                </TableRow>
-              ))}
-            </TableBody>
-          </Table>
-        </div>
-      )}
+        <OrganisationField
+          label="Firm"
+          organisations={organisations.data}
+          value={form.organisationId}
+          onChange={(organisationId) => setForm({ ...form, organisationId })}
+        />
+      </AdminForm>
+      <AdminTable
+        query={invitations}
+        label="Invitations"
+        columns={columns}
+        rowKey={(i) => i.id}
+        emptyTitle="No invitations sent"
+      />
     </>
   );
 }

@@ -6,38 +6,24 @@ import {
   makeStyles,
   Option,
   Subtitle2,
-  Table,
-  TableBody,
-  TableCell,
-  TableHeader,
-  TableHeaderCell,
-  TableRow,
   Text,
   tokens,
 } from '@fluentui/react-components';
 import { useState } from 'react';
-import { EmptyState, ErrorState, LoadingState } from '@/components/states';
+import type { Schema } from '@/lib/api-schemas';
 import { useChangeProjectMembers } from '../api/change-project-members';
 import { createProjectInputSchema, useCreateProject } from '../api/create-project';
 import { useAdminProjects } from '../api/get-admin-projects';
 import { useOrganisations } from '../api/get-organisations';
 import { useProjectMembers } from '../api/get-project-members';
 import { useUsers } from '../api/get-users';
+import { AdminForm, issuesByField, OrganisationField } from './admin-form';
+import { AdminTable, type AdminColumn } from './admin-table';
+
+type Project = Schema<'ProjectDto'>;
+type Member = Schema<'ProjectMemberDto'>;
 
 const useStyles = makeStyles({
-  form: {
-    display: 'grid',
-    gridTemplateColumns: 'repeat(auto-fit, minmax(180px, 1fr))',
-    gap: tokens.spacingHorizontalM,
-    alignItems: 'end',
-    marginBottom: tokens.spacingVerticalL,
-  },
-  columns: {
-    display: 'grid',
-    gridTemplateColumns: 'minmax(0, 1fr) minmax(0, 1fr)',
-    gap: tokens.spacingHorizontalL,
-    '@media (max-width: 1000px)': { gridTemplateColumns: '1fr' },
-  },
   add: {
     display: 'flex',
     gap: tokens.spacingHorizontalS,
@@ -53,74 +39,73 @@ function MembersEditor({ projectId }: { projectId: number }) {
   const users = useUsers();
   const change = useChangeProjectMembers(projectId);
   const [userId, setUserId] = useState<number | undefined>();
-  if (members.isPending) return <LoadingState label="Loading members…" />;
-  if (members.isError) return <ErrorState error={members.error} />;
-  const candidates = (users.data ?? []).filter((u) => !members.data.some((m) => m.id === u.id));
+  const columns: AdminColumn<Member>[] = [
+    { id: 'member', header: 'Member', cell: (m) => m.name },
+    { id: 'role', header: 'Role', cell: (m) => m.role },
+    {
+      id: 'remove',
+      header: 'Remove',
+      hideHeader: true,
+      cell: (m) => (
+        <Button
+          size="small"
+          onClick={() => change.mutate({ userId: m.id, change: 'remove' })}
+          aria-label={`Remove ${m.name}`}
+        >
+          Remove
+        </Button>
+      ),
+    },
+  ];
+  const candidates = (users.data ?? []).filter((u) => !members.data?.some((m) => m.id === u.id));
   return (
     <>
-      <Table size="small" aria-label="Project members">
-        <TableHeader>
-          <TableRow>
-            <TableHeaderCell>Member</TableHeaderCell>
-            <TableHeaderCell>Role</TableHeaderCell>
-            <TableHeaderCell />
-          </TableRow>
-        </TableHeader>
-        <TableBody>
-          {members.data.map((m) => (
-            <TableRow key={m.id}>
-              <TableCell>{m.name}</TableCell>
-              <TableCell>{m.role}</TableCell>
-              <TableCell>
-                <Button
-                  size="small"
-                  onClick={() => change.mutate({ userId: m.id, change: 'remove' })}
-                  aria-label={`Remove ${m.name}`}
-                >
-                  Remove
-                </Button>
-              </TableCell>
-            </TableRow>
-          ))}
-        </TableBody>
-      </Table>
-      <div className={styles.add}>
-        <Field label="Add a member">
-          <Dropdown
-            placeholder="Choose a user"
-            value={candidates.find((u) => u.id === userId)?.name ?? ''}
-            selectedOptions={userId ? [String(userId)] : []}
-            onOptionSelect={(_, d) => setUserId(d.optionValue ? Number(d.optionValue) : undefined)}
+      <AdminTable
+        query={members}
+        label="Project members"
+        columns={columns}
+        rowKey={(m) => m.id}
+        size="small"
+        loadingLabel="Loading members…"
+      />
+      {members.data && (
+        <div className={styles.add}>
+          <Field label="Add a member">
+            <Dropdown
+              placeholder="Choose a user"
+              value={candidates.find((u) => u.id === userId)?.name ?? ''}
+              selectedOptions={userId ? [String(userId)] : []}
+              onOptionSelect={(_, d) => setUserId(d.optionValue ? Number(d.optionValue) : undefined)}
+            >
+              {candidates.map((u) => (
+                <Option key={u.id} value={String(u.id)} text={u.name}>
+                  {u.name} ({u.role})
+                </Option>
+              ))}
+            </Dropdown>
+          </Field>
+          <Button
+            disabled={!userId || change.isPending}
+            onClick={() =>
+              userId && change.mutate({ userId, change: 'add' }, { onSuccess: () => setUserId(undefined) })
+            }
           >
-            {candidates.map((u) => (
-              <Option key={u.id} value={String(u.id)} text={u.name}>
-                {u.name} ({u.role})
-              </Option>
-            ))}
-          </Dropdown>
-        </Field>
-        <Button
-          disabled={!userId || change.isPending}
-          onClick={() =>
-            userId && change.mutate({ userId, change: 'add' }, { onSuccess: () => setUserId(undefined) })
-          }
-        >
-          Add
-        </Button>
-      </div>
+            Add
+          </Button>
+        </div>
+      )}
     </>
   );
 }
 
 export function ProjectsPanel() {
-  const styles = useStyles();
   const projects = useAdminProjects();
   const organisations = useOrganisations();
   const create = useCreateProject();
   const [name, setName] = useState('');
   const [reference, setReference] = useState('');
   const [owner, setOwner] = useState<number | undefined>();
-  const [error, setError] = useState<string | undefined>();
+  const [errors, setErrors] = useState<Record<string, string>>({});
   const [selected, setSelected] = useState<number | undefined>();
 
   const submit = () => {
@@ -130,10 +115,10 @@ export function ProjectsPanel() {
       ownerOrganisationId: owner,
     });
     if (!parsed.success) {
-      setError(parsed.error.issues[0]?.message);
+      setErrors(issuesByField(parsed.error));
       return;
     }
-    setError(undefined);
+    setErrors({});
     create.mutate(parsed.data, {
       onSuccess: (p) => {
         setName('');
@@ -144,80 +129,72 @@ export function ProjectsPanel() {
   };
 
   const current = selected ?? projects.data?.[0]?.id;
+  const columns: AdminColumn<Project>[] = [
+    {
+      id: 'project',
+      header: 'Project',
+      cell: (p) => (
+        <>
+          {p.name}
+          {p.reference ? <Text size={200}> · {p.reference}</Text> : null}
+        </>
+      ),
+    },
+    { id: 'submittals', header: 'Submittals', cell: (p) => p.submittalCount },
+    { id: 'open', header: 'Open', cell: (p) => p.openDiscrepancyCount },
+    {
+      id: 'members',
+      header: 'Members',
+      hideHeader: true,
+      cell: (p) => (
+        <Button
+          size="small"
+          appearance={p.id === current ? 'primary' : 'secondary'}
+          aria-pressed={p.id === current}
+          onClick={() => setSelected(p.id)}
+        >
+          Members
+        </Button>
+      ),
+    },
+  ];
   return (
     <>
-      <div className={styles.form}>
-        <Field label="New project name" required validationMessage={error}>
+      <AdminForm
+        label="New project"
+        submitLabel="Create project"
+        pending={create.isPending}
+        onSubmit={submit}
+      >
+        <Field label="New project name" required validationMessage={errors.name}>
           <Input value={name} onChange={(_, d) => setName(d.value)} />
         </Field>
-        <Field label="Reference">
+        <Field label="Reference" validationMessage={errors.reference}>
           <Input value={reference} onChange={(_, d) => setReference(d.value)} />
         </Field>
-        <Field label="Owner">
-          <Dropdown
-            placeholder="None"
-            value={organisations.data?.find((o) => o.id === owner)?.name ?? ''}
-            selectedOptions={owner ? [String(owner)] : []}
-            onOptionSelect={(_, d) => setOwner(d.optionValue ? Number(d.optionValue) : undefined)}
-          >
-            {(organisations.data ?? []).map((o) => (
-              <Option key={o.id} value={String(o.id)}>
-                {o.name}
-              </Option>
-            ))}
-          </Dropdown>
-        </Field>
-        <Button appearance="primary" onClick={submit} disabled={create.isPending}>
-          Create project
-        </Button>
-      </div>
-      {projects.isPending ? (
-        <LoadingState />
-      ) : projects.isError ? (
-        <ErrorState error={projects.error} />
-      ) : projects.data.length === 0 ? (
-        <EmptyState title="No projects yet" />
-      ) : (
-        <div className={styles.columns}>
-          <Table aria-label="Projects">
-            <TableHeader>
-              <TableRow>
-                <TableHeaderCell>Project</TableHeaderCell>
-                <TableHeaderCell>Submittals</TableHeaderCell>
-                <TableHeaderCell>Open</TableHeaderCell>
-                <TableHeaderCell />
-              </TableRow>
-            </TableHeader>
-            <TableBody>
-              {projects.data.map((p) => (
-                <TableRow key={p.id} aria-selected={p.id === current}>
-                  <TableCell>
-                    {p.name}
-                    {p.reference ? <Text size={200}> · {p.reference}</Text> : null}
-                  </TableCell>
-                  <TableCell>{p.submittalCount}</TableCell>
-                  <TableCell>{p.openDiscrepancyCount}</TableCell>
-                  <TableCell>
-                    <Button
-                      size="small"
-                      appearance={p.id === current ? 'primary' : 'secondary'}
-                      onClick={() => setSelected(p.id)}
-                    >
-                      Members
-                    </Button>
-                  </TableCell>
-                </TableRow>
-              ))}
-            </TableBody>
-          </Table>
-          {current !== undefined && (
+        <OrganisationField
+          label="Owner"
+          organisations={organisations.data}
+          value={owner}
+          onChange={setOwner}
+        />
+      </AdminForm>
+      <AdminTable
+        query={projects}
+        label="Projects"
+        columns={columns}
+        rowKey={(p) => p.id}
+        emptyTitle="No projects yet"
+        isSelected={(p) => p.id === current}
+        aside={(rows) =>
+          current !== undefined && (
             <div>
-              <Subtitle2 as="h3">Members of {projects.data.find((p) => p.id === current)?.name}</Subtitle2>
+              <Subtitle2 as="h3">Members of {rows.find((p) => p.id === current)?.name}</Subtitle2>
               <MembersEditor key={current} projectId={current} />
             </div>
-          )}
-        </div>
-      )}
+          )
+        }
+      />
     </>
   );
 }
