@@ -1,4 +1,4 @@
-import { FluentProvider } from '@fluentui/react-components';
+import { FluentProvider, makeStaticStyles, tokens } from '@fluentui/react-components';
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from 'react';
 import { ligamentDarkTheme, ligamentLightTheme } from './brand';
 
@@ -12,6 +12,14 @@ interface ThemeChoiceValue {
 const ThemeChoiceContext = createContext<ThemeChoiceValue>({ choice: 'light', toggle: () => undefined });
 
 const STORAGE_KEY = 'ligament.theme';
+
+// Plain router links (tables, activity, details) took the browser's blue and visited purple, which are
+// unreadable on the dark theme; they follow the theme's link colours instead. Styled links keep their own.
+const useLinkColours = makeStaticStyles({
+  // :where() keeps the specificity at zero, so any class (nav links, Fluent's Link) still wins.
+  ':where(a:link, a:visited)': { color: tokens.colorBrandForegroundLink },
+  ':where(a:link:hover, a:visited:hover)': { color: tokens.colorBrandForegroundLinkHover },
+});
 
 function initialChoice(): ThemeChoice {
   try {
@@ -29,6 +37,7 @@ export interface ThemeChoiceProviderProps {
 
 /** FluentProvider with Ligament's light or dark theme, remembered per browser. */
 export function ThemeChoiceProvider({ children }: ThemeChoiceProviderProps) {
+  useLinkColours();
   const [choice, setChoice] = useState<ThemeChoice>(initialChoice);
   const toggle = useCallback(() => {
     setChoice((previous) => {
