@@ -1,18 +1,37 @@
-/** Where the installed package keeps its files (works from src/ under tests and from dist/). */
-import { readFileSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
+/**
+ * Where the installed package keeps its files. Works from src/ under tests, from the compiled dist/
+ * modules, and from the bundled bin (dist/cli.js and its chunks in dist/chunks/), which sit at
+ * different depths: the package root is the nearest folder above this code that holds package.json.
+ */
+
+// Through process.getBuiltinModule rather than `import … from 'node:fs'`: an ESM import of a builtin
+// builds a module facade over every export, and node:fs's lazy getters (promises, ReadStream …) then
+// load the stream modules; this file is on the path of `ligament --help` and `--version`.
+const { existsSync, readFileSync } = process.getBuiltinModule('node:fs');
+const { fileURLToPath } = process.getBuiltinModule('node:url');
+
+function findPackageRoot(): URL {
+  let dir = new URL('./', import.meta.url);
+  for (let depth = 0; depth < 4; depth += 1) {
+    if (existsSync(new URL('package.json', dir))) return dir;
+    dir = new URL('../', dir);
+  }
+  return new URL('../../', import.meta.url);
+}
+
+const ROOT_URL = findPackageRoot();
 
 /** The package root (cli/ in the repository, or the installed package's folder). */
-export const PACKAGE_ROOT = fileURLToPath(new URL('../../', import.meta.url));
+export const PACKAGE_ROOT = fileURLToPath(ROOT_URL);
 
 /** Path of a bundled schema file, e.g. `calc.schema.json`. */
 export function schemaPath(name: 'calc.schema.json' | 'result.schema.json'): string {
-  return fileURLToPath(new URL(`../../schema/${name}`, import.meta.url));
+  return fileURLToPath(new URL(`schema/${name}`, ROOT_URL));
 }
 
 /** The package version from package.json. */
 export function packageVersion(): string {
-  const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as {
+  const pkg = JSON.parse(readFileSync(new URL('package.json', ROOT_URL), 'utf8')) as {
     version?: string;
   };
   return pkg.version ?? '0.0.0';
