@@ -1,6 +1,7 @@
+import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { CLI_ROOT, EXAMPLES, FIXTURES, lineOf, REPO_ROOT, run, schemaValidator } from './helpers.js';
+import { CLI_ROOT, EXAMPLES, FIXTURES, lineOf, REPO_ROOT, run, schemaValidator, tempDir } from './helpers.js';
 
 const ex = (name: string): string => join(EXAMPLES, name);
 const ALL = [
@@ -151,5 +152,51 @@ describe('--format markdown', () => {
     expect(md).toContain('### To resolve (6)');
     expect(md).toMatch(/- \*\*LG101\*\* error `schema\/examples\/deck-gusset-overstated\.json:46:15`/);
     expect(md).toContain('> Ligament is a checking aid.');
+  });
+});
+
+describe('EN 1993-1-8 3.10.3(2) in the reports', () => {
+  // Hand-constructed (see src/engine/en1993UnequalAngle.test.ts for the arithmetic): L120×80×12, S235,
+  // three M20 bolts at 70 mm through the 80 mm leg. Anet 1992 mm²; the equivalent L80×80×12 gives
+  // 1992 − (120 − 80)·12 = 1512 mm²; β3 = 0.5 + 0.2·(70/22 − 2.5)/2.5 = 0.5545; Ae = 838.5 mm².
+  const doc = {
+    $schema: 'urn:ligament:schema:calc:1.0',
+    format: 'ligament-calc',
+    formatVersion: '1.0',
+    meta: { project: 'Harbour Lantern Footbridge', preparedBy: 'Priya Halvorsen', date: '2026-12-02' },
+    units: 'mm',
+    code: { standard: 'EN 1993-1-1', method: 'LRFD' },
+    members: [
+      {
+        id: 'BR-1',
+        kind: 'angle',
+        section: { shape: 'angle', a: 120, b: 80, t: 12 },
+        material: { grade: 'S235', Fy: 235, Fu: 360 },
+        holes: [0, 70, 140].map((x, i) => ({ id: `H${i + 1}`, x, element: 'leg-b', gauge: 45, bolt: 'M20' })),
+        load: { directions: ['-x'], shearLag: { connected: 'leg', fastenersPerLine: 3 } },
+      },
+    ],
+  };
+
+  it('text says which net area U multiplies; json carries it and still validates', async () => {
+    const dir = tempDir();
+    try {
+      const file = join(dir.path, 'brace-en-unequal.json');
+      writeFileSync(file, JSON.stringify(doc, null, 2));
+      const text = await run(['check', file]);
+      expect(text.exitCode, text.stderr).toBe(0);
+      expect(text.stdout).toMatch(/Ae = U × 1512(\.0)? mm², not U × An \(EN 1993-1-8 3\.10\.3\(2\): /);
+      const json = await run(['check', '--format', 'json', file]);
+      const result = JSON.parse(json.stdout) as {
+        files: { members: { result: { Ae: number; shearLag?: { netArea?: { area: number } } } }[] }[];
+      };
+      const member = result.files[0]?.members[0]?.result;
+      expect(member?.shearLag?.netArea?.area).toBeCloseTo(1512, 9);
+      expect(member?.Ae).toBeCloseTo((0.5 + 1.2 / 22) * 1512, 9);
+      const validate = schemaValidator(join(REPO_ROOT, 'schema', 'result.schema.json'));
+      expect(validate(result), JSON.stringify(validate.errors?.slice(0, 3))).toBe(true);
+    } finally {
+      dir.remove();
+    }
   });
 });

@@ -98,6 +98,25 @@ function member(m: MemberReport) {
       governing: strength(r.governing),
       ...(r.utilisation !== undefined ? { utilisation: r.utilisation } : {}),
       ...(r.clauses ? { clauses: { yielding: r.clauses.yielding, rupture: r.clauses.rupture } } : {}),
+      ...(r.shearLag
+        ? {
+            shearLag: {
+              U: r.shearLag.U,
+              rule: r.shearLag.rule,
+              basis: r.shearLag.basis,
+              ...(r.shearLag.notApplicable ? { notApplicable: r.shearLag.notApplicable } : {}),
+              ...(r.shearLag.netArea
+                ? {
+                    netArea: {
+                      area: r.shearLag.netArea.area,
+                      clause: r.shearLag.netArea.clause,
+                      basis: r.shearLag.netArea.basis,
+                    },
+                  }
+                : {}),
+            },
+          }
+        : {}),
       ...(r.blockShear
         ? {
             blockShear: {

@@ -89,6 +89,12 @@ function memberBlock(file: FileReport, m: MemberReport, report: RunReport, paint
   out.push(
     `    Ag ${fmtArea(r.Ag, units)} ${u.area}   An ${fmtArea(r.An, units)} ${u.area} (${r.governingDirection})   U ${r.U.toFixed(2)}   Ae ${fmtArea(r.Ae, units)} ${u.area}${cap}`,
   );
+  const netArea = r.shearLag?.netArea;
+  if (netArea) {
+    out.push(
+      `    Ae = U × ${fmtArea(netArea.area, units)} ${u.area}, not U × An (${netArea.clause}: ${netArea.basis})`,
+    );
+  }
   out.push(
     `    ${sym} yielding ${fmtForce(r.yielding.available)} ${u.force}   rupture ${fmtForce(r.rupture.available)} ${u.force}   governs ${r.governing.limitState} ${fmtForce(r.governing.available)} ${u.force}${util}`,
   );
