@@ -365,13 +365,13 @@ export function auditMember(
 
   if (profile.standard === 'EN 1993-1-1' || profile.standard === 'CSA S16-19') {
     findings.push(...profileDetailingFindings(member, profile, result, base));
-    // The grazing check is geometric, not a code rule: made under every profile.
-    findings.push(...grazingFindings(member, profile, result, base));
   } else if (member.section) {
     findings.push(...sectionDetailingFindings(member, profile, result, base));
   } else {
     findings.push(...detailingFindings(member, profile, result, base));
   }
+  // The grazing check is geometric, not a code rule: made on every member under every profile.
+  findings.push(...grazingFindings(member, profile, result, base));
 
   const rank = new Map(CLASS_ORDER.map((c, i) => [c, i] as const));
   const ordered = findings

@@ -65,39 +65,6 @@ describe('detailingFindings', () => {
     expect(run(m, MM).map((f) => [f.code, f.holes])).toEqual([['LG202', ['A']]]);
   });
 
-  it('flags a governing fracture line passing within a hole’s radius (deducted width / 2) of a hole it does not deduct (LG203)', () => {
-    // A straight row A, E, C at x = 0, and beside E on its gauge line a long slot across the load
-    // (3/4 in bolt: 1-7/8 + 1/16 = 1.9375 in deducted, radius 0.96875) 0.85 in further along. No chain
-    // through B can form from -x (E lies on its loaded side), so A–E–C governs and passes 0.85 from B.
-    const slot: HoleInput = {
-      id: 'B',
-      x: 0.85,
-      y: 5,
-      boltDiameter: 0.75,
-      type: 'long-slotted',
-      slot: 'across',
-    };
-    const m = plate(10, [bolt('A', 0, 2), bolt('E', 0, 5), slot, bolt('C', 0, 8)]);
-    const r = analyseMember(m, IN);
-    expect(r.directions[0]!.governing!.holes).toEqual(['A', 'E', 'C']);
-    const found = detailingFindings(m, IN, r, '/members/0').filter((f) => f.code === 'LG203');
-    expect(found).toEqual([
-      expect.objectContaining({
-        holes: ['B'],
-        chain: ['A', 'E', 'C'],
-        direction: '-x',
-        pointer: '/members/0/holes/2',
-      }),
-    ]);
-    expect(found[0]!.claimed).toBeCloseTo(0.85, 12);
-    expect(found[0]!.recomputed).toBeCloseTo(0.96875, 12);
-  });
-
-  it('does not flag a round hole the line passes at more than its radius', () => {
-    const m = plate(10, [bolt('A', 0, 2), bolt('E', 0, 5), bolt('B', 0.85, 5), bolt('C', 0, 8)]);
-    expect(run(m).filter((f) => f.code === 'LG203')).toEqual([]);
-  });
-
   it('skips holes given only by dimension for spacing and edge distance', () => {
     const m = plate(10, [
       { id: 'A', x: 0, y: 0.5, type: 'standard', dimension: { across: 0.5, along: 0.5 } },

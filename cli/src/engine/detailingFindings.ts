@@ -1,5 +1,4 @@
 import { formatQuantity } from './formatQuantity.js';
-import { grazingFindings } from './grazingFindings.js';
 import { makeFinding } from './makeFinding.js';
 import { minimumEdgeDistance } from './minimumEdgeDistance.js';
 import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js';
@@ -10,8 +9,8 @@ import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js
  * - LG202: edge distance across the load (y to each longitudinal edge) below AISC 360 Table J3.4 /
  *   J3.4M. Edge distance along the load needs the plate ends, which calc files do not carry, so it is
  *   not checked; nor are the Table J3.5 increments for oversized and slotted holes;
- * - LG203: the fracture line of a governing chain passing within a hole's radius (deducted width / 2)
- *   of a hole it does not deduct ({@link grazingFindings}).
+ * LG203 (a governing fracture line within a hole's radius of a hole it does not deduct) is made for
+ * every member by grazingFindings, called beside this from auditMember.
  * Holes given only by an explicit dimension (no bolt) are skipped for LG201 and LG202.
  *
  * @param member - the member
@@ -82,8 +81,5 @@ export function detailingFindings(
       );
     }
   });
-
-  // LG203: a governing fracture line grazing a hole it does not deduct.
-  findings.push(...grazingFindings(member, profile, result, memberPointer));
   return findings;
 }

@@ -35,6 +35,59 @@ const angleMember = (xB: number): MemberInput => ({
   holes: [leg('F', 'leg-b', 0), leg('B', 'leg-b', xB, true), leg('A', 'leg-a', 3)],
 });
 
+const IN = AISC;
+const bolt = (id: string, x: number, y: number, d = 0.75): HoleInput => ({
+  id,
+  x,
+  y,
+  boltDiameter: d,
+  type: 'standard',
+});
+const plate = (width: number, holes: HoleInput[]): MemberInput => ({
+  id: 'P1',
+  kind: 'plate',
+  width,
+  thickness: 0.5,
+  material: { Fy: 36, Fu: 58 },
+  directions: ['-x'],
+  holes,
+});
+
+describe('grazingFindings on plates (LG203)', () => {
+  it('flags a governing fracture line passing within a hole’s radius (deducted width / 2) of a hole it does not deduct (LG203)', () => {
+    // A straight row A, E, C at x = 0, and beside E on its gauge line a long slot across the load
+    // (3/4 in bolt: 1-7/8 + 1/16 = 1.9375 in deducted, radius 0.96875) 0.85 in further along. No chain
+    // through B can form from -x (E lies on its loaded side), so A–E–C governs and passes 0.85 from B.
+    const slot: HoleInput = {
+      id: 'B',
+      x: 0.85,
+      y: 5,
+      boltDiameter: 0.75,
+      type: 'long-slotted',
+      slot: 'across',
+    };
+    const m = plate(10, [bolt('A', 0, 2), bolt('E', 0, 5), slot, bolt('C', 0, 8)]);
+    const r = analyseMember(m, IN);
+    expect(r.directions[0]!.governing!.holes).toEqual(['A', 'E', 'C']);
+    const found = grazingFindings(m, IN, r, '/members/0').filter((f) => f.code === 'LG203');
+    expect(found).toEqual([
+      expect.objectContaining({
+        holes: ['B'],
+        chain: ['A', 'E', 'C'],
+        direction: '-x',
+        pointer: '/members/0/holes/2',
+      }),
+    ]);
+    expect(found[0]!.claimed).toBeCloseTo(0.85, 12);
+    expect(found[0]!.recomputed).toBeCloseTo(0.96875, 12);
+  });
+
+  it('does not flag a round hole the line passes at more than its radius', () => {
+    const m = plate(10, [bolt('A', 0, 2), bolt('E', 0, 5), bolt('B', 0.85, 5), bolt('C', 0, 8)]);
+    expect(grazingFindings(m, IN, analyseMember(m, IN), '/members/0')).toEqual([]);
+  });
+});
+
 describe('grazingFindings on sections (LG203, measured on the unfolded section)', () => {
   // Chains from -x, by hand (DOMAIN §4): B shares F's gauge line, so any chain through B has F
   // (x 0 < xB) on its loaded side; {A} has F on its loaded side. {F}: An = 3.75 − 0.4375 = 3.3125;

@@ -1,6 +1,5 @@
 import { elementHoleGroups } from './elementHoleGroups.js';
 import { formatQuantity } from './formatQuantity.js';
-import { grazingFindings } from './grazingFindings.js';
 import { makeFinding } from './makeFinding.js';
 import { minimumEdgeDistance } from './minimumEdgeDistance.js';
 import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js';
@@ -10,9 +9,8 @@ import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js
  * below 2-2/3 d (J3.3) between holes of one element, LG202 edge distance below Table J3.4 / J3.4M
  * measured to the element's free edges only (an angle's toe, a flange's tips; an angle's heel and a
  * web are joined to other elements and have no edge). On a section the edge of a strip is the
- * element's centreline end, so the toe distance is `a − gauge` exactly. LG203 (a governing fracture
- * line within a hole's radius of a hole it does not deduct) is measured on the unfolded section
- * ({@link grazingFindings}).
+ * element's centreline end, so the toe distance is `a − gauge` exactly. LG203 is measured on the
+ * unfolded section by grazingFindings, called beside this from auditMember.
  *
  * @param member - the section member
  * @param profile - units for the tables
@@ -77,6 +75,5 @@ export function sectionDetailingFindings(
       }
     }
   }
-  findings.push(...grazingFindings(member, profile, result, memberPointer));
   return findings;
 }
