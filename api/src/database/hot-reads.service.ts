@@ -33,7 +33,6 @@ export class HotReadsService implements OnApplicationShutdown {
   private db: Promise<sqlite3.Database> | null = null;
   /** Prepared statements by SQL text, in use order (least recent first). */
   private readonly statements = new Map<string, Prepared>();
-  private ownConnection = false;
 
   constructor(
     @InjectConnection() private readonly sequelize: Sequelize,
@@ -72,7 +71,7 @@ export class HotReadsService implements OnApplicationShutdown {
         .filter((p) => p.uses === 0)
         .map((p) => new Promise((resolve) => p.statement.finalize(() => resolve(null)))),
     );
-    if (db && this.ownConnection) {
+    if (db && !this.inMemory) {
       const handle = await db.catch(() => null);
       if (handle) await new Promise((resolve) => handle.close(() => resolve(null)));
     }
@@ -104,6 +103,11 @@ export class HotReadsService implements OnApplicationShutdown {
     return prepared;
   }
 
+  /** No second connection to an in-memory database: the reads share Sequelize's (never closed here). */
+  private get inMemory(): boolean {
+    return this.config.storage === ':memory:';
+  }
+
   private connection(): Promise<sqlite3.Database> {
     this.db ??= this.open().catch((error: unknown) => {
       this.db = null;
@@ -113,7 +117,7 @@ export class HotReadsService implements OnApplicationShutdown {
   }
 
   private async open(): Promise<sqlite3.Database> {
-    if (this.config.storage === ':memory:') {
+    if (this.inMemory) {
       const manager = this.sequelize.connectionManager as unknown as {
         getConnection(options?: object): Promise<sqlite3.Database>;
       };
@@ -127,7 +131,6 @@ export class HotReadsService implements OnApplicationShutdown {
       );
     });
     db.configure('busyTimeout', this.config.busyTimeoutMs);
-    this.ownConnection = true;
     return db;
   }
 }

@@ -58,12 +58,14 @@ const ITEM_JSON = `json_object(${[
     'class',
     'severity',
     'direction',
-  ].map((c) => `'${c}', ${c}`),
-  `'chain', ${CHAIN_JSON}`,
-  ...['claimed', 'recomputed', 'message', 'pointer', 'status'].map((c) => `'${c}', ${c}`),
-  `'acknowledgedAt', ${iso('acknowledgedAt')}`,
-  `'createdAt', ${iso('createdAt')}`,
-  `'updatedAt', ${iso('updatedAt')}`,
+    'chain',
+    'claimed',
+    'recomputed',
+    'message',
+    'pointer',
+    'status',
+  ].map((c) => `'${c}', ${c === 'chain' ? CHAIN_JSON : c}`),
+  ...['acknowledgedAt', 'createdAt', 'updatedAt'].map((c) => `'${c}', ${iso(c)}`),
 ].join(', ')})`;
 const ITEMS_OPEN = Buffer.from('{"items":[');
 const NOTHING = Buffer.alloc(0);
