@@ -16,7 +16,6 @@ import type {
   CodeProfile,
   DirectionResult,
   HoleWidth,
-  LimitState,
   LoadDirection,
   MemberGrossArea,
   MemberInput,
@@ -25,12 +24,12 @@ import type {
 } from './types.js';
 
 // AISC 360 D2: φt = 0.90, Ωt = 1.67 for tensile yielding; φt = 0.75, Ωt = 2.00 for tensile rupture.
-const FACTORS: Record<LimitState, { readonly phi: number; readonly omega: number }> = {
+const FACTORS: Record<'yielding' | 'rupture', { readonly phi: number; readonly omega: number }> = {
   yielding: { phi: 0.9, omega: 1.67 },
   rupture: { phi: 0.75, omega: 2.0 },
 };
 
-function strength(limitState: LimitState, nominal: number, profile: CodeProfile): Strength {
+function strength(limitState: 'yielding' | 'rupture', nominal: number, profile: CodeProfile): Strength {
   const { phi, omega } = FACTORS[limitState];
   const factor = profile.method === 'LRFD' ? phi : omega;
   return {
@@ -99,8 +98,8 @@ function fromProfile(s: ProfileStrength): Strength {
  * bolted through its smaller leg), Ae is that area · U. Under EN 1993-1-1 and CSA S16-19 hole widths, net area rule and strengths
  * come from the code's profile (EN: Npl,Rd = A fy/γM0, Nu,Rd = 0.9 Anet fu/γM2 or 3.10.3 for angles;
  * CSA: Tr = φ Ag Fy, φu Ane Fu); the 0.85 Ag cap is AISC 360 J4.1's and applies only there. With
- * block-shear input the governing tear-out is reported beside the tensile strengths
- * ({@link memberBlockShear}); it does not replace `governing`.
+ * block-shear input the governing tear-out ({@link memberBlockShear}) is reported and enters
+ * `governing`, the least of yielding, rupture and block shear.
  *
  * @param member - the member (width, thickness, material, holes, directions, U, required strength)
  * @param profile - code edition, design method and unit system
@@ -193,8 +192,18 @@ export function analyseMember(
     yielding = strength('yielding', member.material.Fy * Ag * toForce, profile);
     rupture = strength('rupture', member.material.Fu * Ae * toForce, profile);
   }
-  const governing = rupture.available < yielding.available ? rupture : yielding;
   const block = memberBlockShear(member, profile, holeWidths, directions, sectionLayout);
+  const tensile = rupture.available < yielding.available ? rupture : yielding;
+  // Block shear is a limit state of the member's end like rupture: the least of the three governs.
+  const governing: Strength =
+    block && block.available < tensile.available
+      ? {
+          limitState: 'block shear',
+          nominal: block.nominal,
+          factor: block.factor,
+          available: block.available,
+        }
+      : tensile;
   const result: MemberResult = {
     ...(grossArea ? { grossArea } : {}),
     ...(shearLag ? { shearLag } : {}),

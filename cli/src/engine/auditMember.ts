@@ -73,7 +73,8 @@ function recomputedScalar(key: ScalarClaim, result: MemberResult): number | unde
     case 'rupture':
       return result.rupture.available;
     case 'available':
-      return Math.min(result.governing.available, result.blockShear?.available ?? Number.POSITIVE_INFINITY);
+      // The least of yielding, rupture and block shear (analyseMember).
+      return result.governing.available;
   }
 }
 
@@ -82,7 +83,7 @@ function sameHoles(a: readonly string[], b: readonly string[]): boolean {
 }
 
 function context(result: MemberResult, key: ScalarClaim): string {
-  if (key === 'available' && result.blockShear && result.blockShear.available < result.governing.available) {
+  if (key === 'available' && result.governing.limitState === 'block shear' && result.blockShear) {
     return ` (block shear governs, ${result.blockShear.clause})`;
   }
   if (key !== 'An' && key !== 'Ae' && key !== 'rupture' && key !== 'available') return '';
@@ -321,7 +322,8 @@ export function auditMember(
 
   // Block shear below the tensile strengths, neither claimed nor allowed for in `available`.
   const block = result.blockShear;
-  if (block && block.available < result.governing.available) {
+  const tensile = result.rupture.available < result.yielding.available ? result.rupture : result.yielding;
+  if (block && result.governing.limitState === 'block shear') {
     // A claimed `available` is compared with the lesser of the two (LG103/LG113) instead.
     if (claims.available === undefined && claims.blockShear === undefined) {
       findings.push(
@@ -329,7 +331,7 @@ export function auditMember(
           ...at,
           direction: block.direction,
           recomputed: block.available,
-          message: `Block shear ${formatQuantity(block.available, 'force', u)} (${block.clause}${block.projectDefined ? ', staggered tension plane: project-defined' : ''}) is below the tensile ${result.governing.limitState} strength ${formatQuantity(result.governing.available, 'force', u)}`,
+          message: `Block shear ${formatQuantity(block.available, 'force', u)} (${block.clause}${block.projectDefined ? ', staggered tension plane: project-defined' : ''}) is below the tensile ${tensile.limitState} strength ${formatQuantity(tensile.available, 'force', u)}`,
           pointer: `${base}/blockShear`,
         }),
       );

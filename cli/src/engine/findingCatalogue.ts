@@ -174,7 +174,7 @@ export const FINDING_CATALOGUE: readonly FindingRule[] = [
     class: 'overstated',
     severity: 'warning',
     title: 'Block shear governs the tensile strength',
-    help: 'The weakest block tear-out of the bolt group is below the member’s tensile yielding and rupture strengths, and the submission claims neither a block shear strength nor an available strength (a claimed available strength is compared with the lesser of the two). The connection, not the member, limits the load.',
+    help: 'The weakest block tear-out of the bolt group is below the member’s tensile yielding and rupture strengths, and the submission claims neither a block shear strength nor an available strength (a claimed available strength is compared with the governing strength, the least of yielding, rupture and block shear). The connection, not the member, limits the load.',
   },
   {
     code: 'LG141',

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { analyseMember } from './analyseMember.js';
 import { holeWidth } from './holeWidth.js';
 import { memberBlockShear } from './memberBlockShear.js';
 import type { CodeProfile, MemberInput } from './types.js';
@@ -44,5 +45,16 @@ describe('memberBlockShear', () => {
     void blockShear;
     expect(memberBlockShear(bare, LRFD, widths(bare), ['-x'])).toBeUndefined();
     expect(memberBlockShear({ ...plate([]), holes: [] }, LRFD, [], ['-x'])).toBeUndefined();
+  });
+
+  it('enters the governing strength when it is the least of yielding, rupture and block shear', () => {
+    // Same plate by hand: yielding 0.9·36·5 = 162, rupture 0.75·58·4.125 = 179.4, block shear 140.87 kips.
+    const r = analyseMember(plate([0, 3]), LRFD);
+    expect(r.governing.limitState).toBe('block shear');
+    expect(r.governing.available).toBeCloseTo(0.75 * (97.2 + 90.625), 9);
+    expect(r.governing.factor).toBe(0.75);
+    const { blockShear, ...bare } = plate([0, 3]);
+    void blockShear;
+    expect(analyseMember(bare, LRFD).governing.limitState).toBe('yielding');
   });
 });

@@ -232,7 +232,8 @@ export interface DirectionResult {
   readonly share: ShareCheck | null;
 }
 
-export type LimitState = 'yielding' | 'rupture';
+/** Tensile yielding, tensile rupture, or block shear (AISC 360 J4.3, EN 1993-1-8 3.10.2, CSA S16 13.11). */
+export type LimitState = 'yielding' | 'rupture' | 'block shear';
 
 export interface Strength {
   readonly limitState: LimitState;
@@ -261,7 +262,10 @@ export interface MemberResult {
   readonly capped: boolean;
   readonly yielding: Strength;
   readonly rupture: Strength;
-  /** The lesser of the two available strengths. */
+  /**
+   * The least available strength: yielding, rupture, and block shear when block-shear input is given
+   * (then `limitState` is `block shear` and the values are {@link MemberBlockShear}'s).
+   */
   readonly governing: Strength;
   /** requiredStrength / governing.available, when a required strength is given. */
   readonly utilisation?: number;
