@@ -89,8 +89,8 @@ function fromProfile(s: ProfileStrength): Strength {
  * Net section and tensile strength of a member for each load direction (DOMAIN §3–5, AISC 360 D2,
  * D3, J4.1): Ag = width·t; per direction the least chain that can form under the full load, its k
  * least companions and the equal-share check; An = min over directions of min(governing net area, Ag);
- * Ae = An·U (U = 1.0 by default, Table D3.1 case 1), capped at 0.85 Ag for splice plates and gussets
- * (J4.1(b)); yielding Pn = Fy·Ag, rupture Pn = Fu·Ae; in `mm` MPa·mm² = N, reported in kN.
+ * Ae = An·U (U = 1.0 by default, Table D3.1 case 1), capped at 0.85 Ag for bolted splice plates only
+ * (J4.1(b); a gusset is not capped); yielding Pn = Fy·Ag, rupture Pn = Fu·Ae; in `mm` MPa·mm² = N, reported in kN.
  *
  * Members with a `section` (angles, tees, W-shapes, channels) are unfolded and searched as connected
  * flat elements (sections/README.md); Ag is the tabulated value when given. U comes from
@@ -166,10 +166,8 @@ export function analyseMember(
   // EN 1993-1-8 3.10.3(2): an unequal angle bolted through its smaller leg takes β on another Anet.
   const uncapped = (shearLag?.netArea?.area ?? An) * U;
   const tension = tensionProfileOf(profile);
-  const cap =
-    !tension && (member.kind === 'splice-plate' || member.kind === 'gusset')
-      ? 0.85 * Ag
-      : Number.POSITIVE_INFINITY;
+  // AISC 360 J4.1(b): "for bolted splice plates, Ae = An ≤ 0.85 Ag"; gussets are not capped.
+  const cap = !tension && member.kind === 'splice-plate' ? 0.85 * Ag : Number.POSITIVE_INFINITY;
   const Ae = Math.min(uncapped, cap);
   const toForce = profile.units === 'mm' ? 1 / 1000 : 1;
   let yielding: Strength;

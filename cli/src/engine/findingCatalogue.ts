@@ -22,7 +22,7 @@ export const FINDING_CATALOGUE: readonly FindingRule[] = [
     class: 'overstated',
     severity: 'error',
     title: 'Claimed effective area exceeds the recomputed effective area',
-    help: 'The claimed Ae is larger than An·U, or larger than 0.85 Ag for a splice plate or gusset (AISC 360 J4.1(b)). The rupture strength built on it is unconservative.',
+    help: 'The claimed Ae is larger than An·U, or larger than 0.85 Ag for a bolted splice plate (AISC 360 J4.1(b)). The rupture strength built on it is unconservative.',
   },
   {
     code: 'LG103',

@@ -256,7 +256,7 @@ export interface MemberResult {
   /** Direction whose An governs. */
   readonly governingDirection: LoadDirection;
   readonly U: number;
-  /** An·U, capped at 0.85 Ag for splice and gusset plates (AISC 360 J4.1). */
+  /** An·U, capped at 0.85 Ag for bolted splice plates (AISC 360 J4.1(b)). */
   readonly Ae: number;
   /** True when the 0.85 Ag cap governed Ae. */
   readonly capped: boolean;
