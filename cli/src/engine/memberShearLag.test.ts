@@ -90,3 +90,61 @@ describe('memberShearLag', () => {
     expect(memberShearLag({ ...rest, kind: 'plate' }, AISC, 1)).toBeUndefined();
   });
 });
+
+describe('memberShearLag: the AISC 360-16/-22 D3 floor (published text: U of an open section need not be less than the connected elements’ gross area over Ag)', () => {
+  // W14x68 as Quimby uses it (d 14.0, bf 10.0, tf 0.720, tw 0.415, Ag 20.0 in²), bolted through both
+  // flanges with 2 bolts per line at 3 in: case 7 does not apply; case 2 with ȳ 1.29 in (WT7x34, from
+  // memory) gives 1 − 1.29/3 = 0.57; the floor 2 · 10.0 · 0.720 / 20.0 = 0.72 governs.
+  const w: MemberInput = {
+    id: 'W',
+    kind: 'w-shape',
+    width: 0,
+    thickness: 0.72,
+    material: { Fy: 50, Fu: 65 },
+    directions: ['-x'],
+    section: { shape: 'w-shape', d: 14, bf: 10, tf: 0.72, tw: 0.415, tabulatedAg: 20 },
+    holes: (['flange-1', 'flange-2'] as const).flatMap((element) =>
+      [-2.75, 2.75].flatMap((gauge) =>
+        [0, 3].map((x) => ({
+          id: `${element}-${gauge}-${x}`,
+          x,
+          y: Number.NaN,
+          element,
+          gauge,
+          boltDiameter: 0.875,
+          type: 'standard' as const,
+        })),
+      ),
+    ),
+    shearLag: { connected: 'flange', length: 3, xbar: 1.29, fastenersPerLine: 2 },
+  };
+
+  it('raises U from case 2’s 0.57 to 0.72 and says so in the basis (before: 0.57)', () => {
+    const r = memberShearLag(w, AISC, 15, memberUnfolded(w, widths(w, 1)))!;
+    expect(r.U).toBeCloseTo(0.72, 12);
+    expect(r.rule).toBe("AISC 360-22 D3 (connected elements' share of Ag)");
+    expect(r.basis).toBe(
+      "case 2: 1 − x̄/l = 1 − 1.29/3 = 0.57; D3 floor (governs): connected elements' gross area / Ag = 14.4/20 = 0.72",
+    );
+  });
+
+  it('does not apply the floor under AISC 360-10, which has none (from memory)', () => {
+    const r = memberShearLag(w, { ...AISC, standard: 'AISC 360-10' }, 15, memberUnfolded(w, widths(w, 1)))!;
+    expect(r.U).toBeCloseTo(0.57, 12);
+    expect(r.rule).toBe('AISC 360 Table D3.1 case 2');
+  });
+
+  it('counts an angle’s connected leg at its full width a·t (L4x4x1/2, one leg: 2.0 / 3.75)', () => {
+    // L4x4x1/2: Ag 3.75 in² (AISC Manual). 2 bolts at 3 in, x̄ 1.18 (from memory): case 2 = 1 − 1.18/3 = 0.607;
+    // floor 4 · 0.5 / 3.75 = 0.533 does not govern but is reported.
+    const m: MemberInput = {
+      ...angleMember(2, 3),
+      section: { shape: 'angle', a: 4, b: 4, t: 0.5, tabulatedAg: 3.75 },
+      holes: angleMember(2, 3).holes.map((h) => ({ ...h, gauge: 2.5, boltDiameter: 0.75 })),
+      shearLag: { connected: 'leg', length: 3, xbar: 1.18, fastenersPerLine: 2 },
+    };
+    const r = memberShearLag(m, AISC, 3, memberUnfolded(m, widths(m, 0.875)))!;
+    expect(r.U).toBeCloseTo(1 - 1.18 / 3, 12);
+    expect(r.basis).toContain("D3 floor: connected elements' gross area / Ag = 2/3.75 = 0.533");
+  });
+});

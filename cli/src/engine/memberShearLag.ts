@@ -25,6 +25,32 @@ function aiscShape(member: MemberInput): ShearLagShape {
   }
 }
 
+/**
+ * Gross area of the elements holding holes (all pieces), for the AISC 360-16/-22 D3 floor: each
+ * element at its full width × thickness (an angle leg a·t or b·t, a flange bf·tf, a W web
+ * (d − 2tf)·tw, a tee stem (d − tf)·tw, a channel web d·tw), at most Ag. Undefined when no hole lies
+ * in a known element.
+ */
+function connectedGrossArea(member: MemberInput, layout: SectionLayout): number | undefined {
+  const spec = member.section;
+  if (!spec) return undefined;
+  const ids = new Set(layout.holes.map((h) => h.element));
+  let area = 0;
+  for (const e of layout.section.elements) {
+    if (!ids.has(e.id)) continue;
+    // An angle's second leg and a channel's flanges give their overlap to the other element in Ag;
+    // as a connected element each counts at its full width.
+    const full =
+      spec.shape === 'angle' && e.id === 'leg-b' && spec.b !== undefined
+        ? spec.b
+        : spec.shape === 'channel' && e.role === 'flange' && spec.bf !== undefined
+          ? spec.bf
+          : e.areaWidth;
+    area += full * e.thickness;
+  }
+  return area > 0 ? area * layout.section.pieces : undefined;
+}
+
 function notApplicable(why: string): MemberShearLag {
   return { U: 1, rule: 'none', basis: `U taken as 1.0: ${why}`, notApplicable: why };
 }
@@ -32,7 +58,9 @@ function notApplicable(why: string): MemberShearLag {
 /**
  * Shear lag factor of a member under the file's code:
  * - a U given in the file is used as is;
- * - AISC 360: Table D3.1 cases 2, 7 and 8 from the connection data (the larger of case 2 and 7 or 8);
+ * - AISC 360: Table D3.1 cases 2, 7 and 8 from the connection data (the larger of case 2 and 7 or 8),
+ *   and under 360-16/-22 not less than the connected elements' gross area over Ag (D3, open sections;
+ *   the elements holding holes are the connected ones), reported in `basis`;
  * - CSA S16-19 12.3.3.2: Ane = factor · An, the factor reported as U (angles 0.80 with 4 or more
  *   transverse lines, 0.60 with fewer; W flanges 0.90/0.85; others 0.85/0.75);
  * - EN 1993-1-8 3.10.3: an angle connected by one leg takes β2 or β3 (interpolated on p1) as U, so
@@ -150,8 +178,14 @@ export function memberShearLag(
       throw err;
     }
   }
+  // AISC 360-16 and 360-22 D3 (not 360-10): open sections' U need not be below Agc/Ag.
+  const connectedArea =
+    profile.standard !== 'AISC 360-10' && layout ? connectedGrossArea(member, layout) : undefined;
   try {
     const r = shearLagFactor({
+      ...(connectedArea !== undefined && layout
+        ? { floor: { connectedArea, grossArea: layout.Ag } }
+        : {}),
       shape: aiscShape(member),
       connected: spec.connected,
       ...(spec.length !== undefined ? { length: spec.length } : {}),
@@ -161,10 +195,19 @@ export function memberShearLag(
       ...(section?.d !== undefined ? { d: section.d } : {}),
     });
     const chosen = r.candidates.find((c) => c.case === r.case)!;
+    const cases = r.candidates.filter((c) => c.case !== 'D3 floor');
+    const floor = r.floor
+      ? `; D3 floor${r.case === 'D3 floor' ? ' (governs)' : ''}: ${r.floor.basis}`
+      : '';
     return {
       U: r.U,
-      rule: r.case === 'given' ? 'given' : `AISC 360 Table D3.1 case ${r.case}`,
-      basis: r.candidates.map((c) => `case ${c.case}: ${c.basis}`).join('; ') || chosen.basis,
+      rule:
+        r.case === 'given'
+          ? 'given'
+          : r.case === 'D3 floor'
+            ? `${profile.standard} D3 (connected elements' share of Ag)`
+            : `AISC 360 Table D3.1 case ${r.case}`,
+      basis: (cases.map((c) => `case ${c.case}: ${c.basis}`).join('; ') || chosen.basis) + floor,
     };
   } catch (err) {
     if (err instanceof ShearLagError) return notApplicable(err.message.replace(/^[^:]*: /, ''));

@@ -4,6 +4,7 @@ import { shearLagCase7 } from './shearLagCase7.js';
 import { shearLagCase8 } from './shearLagCase8.js';
 import { ShearLagError } from './shearLagError.js';
 import { shearLagFactor } from './shearLagFactor.js';
+import { shearLagFloor } from './shearLagFloor.js';
 
 // R6: AISC teaching calculations to AISC 360-16 / 15th ed. Manual. Section properties (ȳ, x̄, bf, d)
 // are inputs taken from the examples as published.
@@ -80,5 +81,47 @@ describe('Table D3.1 cases (AISC 360-16 Table D3.1, as restated in R6’s calcs)
     expect(() => shearLagFactor({ shape: 'single-angle', connected: 'leg', fastenersPerLine: 2 })).toThrow(
       /give x̄ and l, or U/,
     );
+  });
+});
+
+describe('the D3 floor of open sections (AISC 360-16 D3, published text: U need not be less than the ratio of the gross area of the connected element(s) to the member gross area)', () => {
+  it('is the connected share of Ag, at most 1, and refuses areas that are not positive', () => {
+    // W14x68 (d 14.0, bf 10.0, tf 0.720, Ag 20.0 in²; Quimby, as R4/R5 use it): both flanges 2·10.0·0.72 = 14.4.
+    expect(shearLagFloor(14.4, 20.0)).toBeCloseTo(0.72, 12);
+    expect(shearLagFloor(25, 20)).toBe(1);
+    expect(() => shearLagFloor(0, 20)).toThrow(ShearLagError);
+    expect(() => shearLagFloor(5, -1)).toThrow(/gross area must be positive/);
+  });
+
+  it('raises a smaller Table D3.1 U to the floor and reports it; a larger U is kept', () => {
+    // Both flanges of the W14x68, 2 bolts per line (case 7 needs 3), l = 3 in, ȳ of the WT7x34 = 1.29 in
+    // (from memory of the AISC Manual): case 2 U = 1 − 1.29/3 = 0.57 < floor 0.72.
+    const low = shearLagFactor({
+      shape: 'W',
+      connected: 'flange',
+      length: 3,
+      eccentricity: 1.29,
+      fastenersPerLine: 2,
+      bf: 10,
+      d: 14,
+      floor: { connectedArea: 14.4, grossArea: 20 },
+    });
+    expect(low.U).toBeCloseTo(0.72, 12);
+    expect(low.case).toBe('D3 floor');
+    expect(low.floor?.basis).toBe("connected elements' gross area / Ag = 14.4/20 = 0.72");
+    // R6 W12x72 (case 2, 0.915) is above its floor 2·12.0·0.670/21.1 = 0.762 (AISC Manual 15th ed. dimensions).
+    const high = shearLagFactor({
+      shape: 'W',
+      connected: 'flange',
+      length: 12,
+      eccentricity: 1.02,
+      fastenersPerLine: 5,
+      bf: 12.0,
+      d: 12.3,
+      floor: { connectedArea: 2 * 12.0 * 0.67, grossArea: 21.1 },
+    });
+    expect(high.U).toBeCloseTo(0.915, 3);
+    expect(high.case).toBe(2);
+    expect(high.floor?.U).toBeCloseTo(0.762, 3);
   });
 });

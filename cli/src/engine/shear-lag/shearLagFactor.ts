@@ -1,6 +1,7 @@
 import { shearLagCase2 } from './shearLagCase2.js';
 import { shearLagCase7 } from './shearLagCase7.js';
 import { shearLagCase8 } from './shearLagCase8.js';
+import { shearLagFloor } from './shearLagFloor.js';
 import { ShearLagError } from './shearLagError.js';
 import type { ShearLagCandidate, ShearLagInput, ShearLagResult } from './types.js';
 
@@ -10,7 +11,8 @@ const round = (v: number): string => String(Math.round(v * 1000) / 1000);
  * The shear lag factor U for a bolted member (AISC 360 Table D3.1): a U given in the file as is;
  * otherwise every case that applies — case 2 (1 − x̄/l) when x̄ and l are given, case 7 for W, M, S,
  * HP and tees, case 8 for single and double angles — and the largest of them, since the table permits
- * the larger of case 2 and case 7 or 8.
+ * the larger of case 2 and case 7 or 8 — and, when `floor` is given (AISC 360-16/-22 D3, open sections),
+ * not less than the connected elements' gross area over Ag ({@link shearLagFloor}).
  *
  * @param input - shape class, connected element, l, x̄, fasteners per line, bf and d, or a given U
  * @returns U with the case chosen and every candidate
@@ -61,5 +63,15 @@ export function shearLagFactor(input: ShearLagInput): ShearLagResult {
   }
   let best = candidates[0]!;
   for (const c of candidates) if (c.U > best.U) best = c;
-  return { U: best.U, case: best.case, candidates };
+  if (!input.floor) return { U: best.U, case: best.case, candidates };
+  // AISC 360-16/-22 D3: U of an open section need not be less than the connected elements' share of Ag.
+  const { connectedArea, grossArea } = input.floor;
+  const ratio = shearLagFloor(connectedArea, grossArea);
+  const floor: ShearLagCandidate = {
+    case: 'D3 floor',
+    U: ratio,
+    basis: `connected elements' gross area / Ag = ${round(connectedArea)}/${round(grossArea)} = ${round(ratio)}`,
+  };
+  if (ratio <= best.U) return { U: best.U, case: best.case, candidates, floor };
+  return { U: ratio, case: 'D3 floor', candidates: [...candidates, floor], floor };
 }

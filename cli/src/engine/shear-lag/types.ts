@@ -24,11 +24,16 @@ export interface ShearLagInput {
   readonly d?: number;
   /** A U given in the file: used as is. */
   readonly given?: number;
+  /**
+   * Gross areas for the D3 floor of open sections (AISC 360-16/-22): U need not be less than
+   * connected / member. Absent, no floor applies (AISC 360-10, plates).
+   */
+  readonly floor?: { readonly connectedArea: number; readonly grossArea: number };
 }
 
 /** A Table D3.1 case that applies, with its U. */
 export interface ShearLagCandidate {
-  readonly case: 2 | 7 | 8 | 'given';
+  readonly case: 2 | 7 | 8 | 'given' | 'D3 floor';
   readonly U: number;
   /** Why this value, in one line with the numbers. */
   readonly basis: string;
@@ -40,4 +45,6 @@ export interface ShearLagResult {
   readonly case: ShearLagCandidate['case'];
   /** Every case that applied; U is the largest (Table D3.1 permits the larger of case 2 and 7 or 8). */
   readonly candidates: readonly ShearLagCandidate[];
+  /** The D3 floor when one was asked for (it is also among the candidates when it governs). */
+  readonly floor?: ShearLagCandidate;
 }
