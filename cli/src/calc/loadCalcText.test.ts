@@ -346,6 +346,46 @@ describe('loadCalcText: messages in plain words', () => {
     expect(edge.map((e) => [e.pointer, e.rule])).toEqual([['/members/0/holes/0', 'hole-outside-member']]);
   });
 
+  // Four gauge lines 1/2 in apart in a 2-1/2 in plate, staggered 0.7 in: no two 13/16 in holes overlap
+  // (centres 0.86 in apart), yet the zigzag chain deducts 4 × 0.875 and gets back 3 × 0.7²/(4 · 0.5):
+  // wn = 2.5 − 3.5 + 0.735 = −0.265 in (AISC 360 B4.3b hole width and s²/4g, common practice).
+  const ZIGZAG = [
+    { id: 'A', x: 0, y: '1/2', bolt: '3/4' },
+    { id: 'B', x: 0.7, y: 1, bolt: '3/4' },
+    { id: 'C', x: 0, y: '1-1/2', bolt: '3/4' },
+    { id: 'D', x: 0.7, y: 2, bolt: '3/4' },
+  ];
+
+  it('rejects a member whose least chain leaves a net width ≤ 0 (rule net-area-positive), with file, pointer and position', () => {
+    const text = variant((_, m) => {
+      m['width'] = '2-1/2';
+      m['holes'] = ZIGZAG;
+    });
+    const errors = failed(loadCalcText(text, 'zigzag.json'));
+    expect(errors.map((e) => [e.file, e.pointer, e.rule])).toEqual([
+      ['zigzag.json', '/members/0/holes', 'net-area-positive'],
+    ]);
+    expect(errors[0]!.message).toBe(
+      '/members/0/holes: chain A-B-C-D loaded from −x leaves a net width of -0.27 in (width 2.50 in − holes 3.50 in + s²/4g 0.73 in); the holes take the whole width, so it is not a tension member (rule net-area-positive)',
+    );
+    const lines = text.split('\n');
+    expect(lines[errors[0]!.line - 1]!.trim()).toBe('"holes": [');
+  });
+
+  it('accepts the same holes in a plate wide enough for a positive net width', () => {
+    // 3-1/2 in: the gauge lines keep their spacing, the edges get 1/2 in more each side → wn = 0.735 in.
+    const doc = loaded(
+      loadCalcText(
+        variant((_, m) => {
+          m['width'] = '3-1/2';
+          m['holes'] = ZIGZAG.map((h, i) => ({ ...h, y: 1 + 0.5 * i }));
+        }),
+        'wide.json',
+      ),
+    );
+    expect(doc.members[0]!.input.width).toBe(3.5);
+  });
+
   it('reports duplicate member ids at the second id', () => {
     const errors = failed(
       loadCalcText(

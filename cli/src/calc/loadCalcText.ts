@@ -1,5 +1,6 @@
-import { parseTree, getNodeValue, type Node, type ParseError } from 'jsonc-parser';
+import { getLocation, getNodeValue, parseTree, type Node, type ParseError } from 'jsonc-parser';
 import { EngineError, inspectLayout, memberHoleWidth } from '../engine/index.js';
+import { netAreaIssues } from './netAreaIssues.js';
 import { normaliseDocument } from './normalise.js';
 import { lineIndex, nodeAtPointer, escapeSegment } from './positions.js';
 import type { CalcError, LoadResult, SourcePosition } from './types.js';
@@ -95,6 +96,29 @@ function duplicateKeys(root: Node, file: string, position: (o: number) => Source
   return out;
 }
 
+/** A calc file nests about six levels; deeper input is refused before anything recurses over it. */
+const MAX_DEPTH = 32;
+
+/**
+ * Offset of the first `[` or `{` nested deeper than MAX_DEPTH, or -1. A plain scan of the text: the
+ * JSON parser and everything after it recurse, and a file of 20,000 brackets overflowed the stack.
+ */
+function tooDeepAt(text: string): number {
+  let depth = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i++) {
+    const c = text[i];
+    if (inString) {
+      if (c === '\\') i++;
+      else if (c === '"') inString = false;
+    } else if (c === '"') inString = true;
+    else if (c === '[' || c === '{') {
+      if (++depth > MAX_DEPTH) return i;
+    } else if (c === ']' || c === '}') depth--;
+  }
+  return -1;
+}
+
 const byPosition = (a: CalcError, b: CalcError): number => a.line - b.line || a.column - b.column;
 
 /**
@@ -120,6 +144,15 @@ export function loadCalcText(text: string, fileName: string): LoadResult {
       file,
       errors: [at(file, { line: 1, column: 1 }, '', 'json-syntax', 'file is empty (rule json-syntax)')],
     };
+  }
+  const deepAt = tooDeepAt(source);
+  if (deepAt >= 0) {
+    // getLocation stops at the offset, so it recurses only MAX_DEPTH levels.
+    const pointer = getLocation(source, deepAt)
+      .path.map((segment) => `/${escapeSegment(String(segment))}`)
+      .join('');
+    const message = `${pointer || '(document)'}: nests more than ${MAX_DEPTH} levels deep; a calc file needs fewer than ten (rule json-depth)`;
+    return { ok: false, file, errors: [at(file, position(deepAt), pointer, 'json-depth', message)] };
   }
   const parseErrors: ParseError[] = [];
   const root = parseTree(source, parseErrors, {
@@ -181,6 +214,15 @@ export function loadCalcText(text: string, fileName: string): LoadResult {
     for (const f of layoutIssues) {
       const pointer = `/members/${member.index}${f.pointer}`;
       errors.push(at(file, locate(pointer), pointer, f.name, `${pointer}: ${f.message} (rule ${f.name})`));
+    }
+    if (layoutIssues.length > 0) continue;
+    // A least chain with a net width or area ≤ 0: an input error, never a negative strength.
+    const net = netAreaIssues(m, document.profile);
+    if (net) {
+      const pointer = `/members/${member.index}${net.pointer}`;
+      errors.push(
+        at(file, locate(pointer), pointer, net.rule, `${pointer}: ${net.message} (rule ${net.rule})`),
+      );
     }
   }
   if (errors.length > 0) return { ok: false, file, errors: errors.sort(byPosition) };

@@ -106,6 +106,28 @@ describe('analyseMember', () => {
     expect(analyseMember({ ...plate, kind: 'gusset' }, LRFD)).toMatchObject({ Ae: 9.5, capped: false });
   });
 
+  it('throws a module-prefixed error, not a negative strength, when the least chain leaves a net area ≤ 0', () => {
+    // 2-1/2 × 1/2 plate, four 3/4 in bolts on gauge lines 1/2 in apart, staggered 0.7 in (no holes
+    // overlap): wn = 2.5 − 4 · 0.875 + 3 · 0.7²/(4 · 0.5) = −0.265 in (AISC 360 B4.3b, s²/4g; common
+    // practice). Before this check: An = −0.1325 in², rupture φPn = 0.75 · 58 · −0.1325 = −5.76 kip.
+    const zigzag: MemberInput = {
+      ...d9,
+      width: 2.5,
+      thickness: 0.5,
+      holes: [0.5, 1, 1.5, 2].map((y, i) => ({
+        id: 'ABCD'[i]!,
+        x: i % 2 === 0 ? 0 : 0.7,
+        y,
+        boltDiameter: 0.75,
+        type: 'standard' as const,
+      })),
+    };
+    expect(() => analyseMember(zigzag, LRFD)).toThrow(
+      /^ligament\/engine: member .*: chain A-B-C-D loaded from -x leaves a net area of -0\.132\d+, not positive \(rule net-area-positive\)$/,
+    );
+    expect(() => analyseMember(zigzag, LRFD)).toThrow(EngineError);
+  });
+
   it('gives An = Ag without holes', () => {
     const r = analyseMember({ ...d9, holes: [] }, LRFD);
     expect(r).toMatchObject({ An: 7, Ae: 7 });

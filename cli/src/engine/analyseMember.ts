@@ -105,7 +105,9 @@ function fromProfile(s: ProfileStrength): Strength {
  * @param profile - code edition, design method and unit system
  * @param options - k least chains per direction (default 10); directions (default the member's)
  * @returns the result
- * @throws EngineError when a hole's bolt size is not in the hole table, or width or thickness is not positive
+ * @throws EngineError when a hole's bolt size is not in the hole table, width or thickness is not
+ *   positive, or a direction's least chain leaves a net area ≤ 0 (the loader reports that as the rule
+ *   net-area-positive with the file and pointer)
  * @example
  * // AISC Design Examples v13.0 D.9: 14 × 1/2 plate, A36, four 3/4 in bolts, loaded from -x
  * const r = analyseMember(d9Member, { standard: 'AISC 360-22', method: 'LRFD', units: 'in' });
@@ -161,10 +163,25 @@ export function analyseMember(
       governingDirection = d.direction;
     }
   }
+  // A net section ≤ 0 is an input error (the loader's rule net-area-positive), never a negative strength.
+  for (const d of results) {
+    if (d.An > 0) continue;
+    const chain = d.governing ? `chain ${d.governing.holes.join('-')}` : 'the section';
+    throw new EngineError(
+      'invalid-argument',
+      `member ${member.id}: ${chain} loaded from ${d.direction} leaves a net area of ${d.An}, not positive (rule net-area-positive)`,
+    );
+  }
   const shearLag = memberShearLag(member, profile, An, sectionLayout);
   const U = shearLag?.U ?? 1.0;
   // EN 1993-1-8 3.10.3(2): an unequal angle bolted through its smaller leg takes β on another Anet.
   const uncapped = (shearLag?.netArea?.area ?? An) * U;
+  if (!(uncapped > 0)) {
+    throw new EngineError(
+      'invalid-argument',
+      `member ${member.id}: the net area U multiplies is ${shearLag?.netArea?.area ?? An}, not positive (rule net-area-positive)`,
+    );
+  }
   const tension = tensionProfileOf(profile);
   // AISC 360 J4.1(b): "for bolted splice plates, Ae = An ≤ 0.85 Ag"; gussets are not capped.
   const cap = !tension && member.kind === 'splice-plate' ? 0.85 * Ag : Number.POSITIVE_INFINITY;
