@@ -2,6 +2,7 @@ import { Controller, Get, Param, ParseIntPipe, StreamableFile } from '@nestjs/co
 import { ApiBearerAuth, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
 import { ProjectScope } from '../auth/decorators/project-scope.decorator.js';
 import { TokenAccess } from '../auth/decorators/token-access.decorator.js';
+import { attachmentDisposition } from '../common/content-disposition.js';
 import { CalcFilesService } from './calc-files.service.js';
 import { CalcFileDetailDto, CalcFileDto } from './dto/calc-file.dto.js';
 
@@ -36,7 +37,7 @@ export class CalcFilesController {
     const file = await this.files.content(fileId);
     return new StreamableFile(file.content, {
       type: 'application/json',
-      disposition: `attachment; filename="${file.fileName.replace(/["\\\r\n]/g, '_')}"`,
+      disposition: attachmentDisposition(file.fileName),
       length: file.content.length,
     });
   }

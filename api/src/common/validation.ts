@@ -1,9 +1,17 @@
-import { BadRequestException, ValidationError, ValidationPipe } from '@nestjs/common';
+import { type ArgumentMetadata, BadRequestException, ValidationError, ValidationPipe } from '@nestjs/common';
 
-function flatten(
-  errors: ValidationError[],
-  prefix = '',
-): { property: string; constraints: Record<string, string> }[] {
+/** No request of this API nests deeper than a few levels; 32 leaves room and stops stack overflows. */
+export const MAX_INPUT_DEPTH = 32;
+
+/** Whole numbers in ids, pages and bodies must fit a safe integer (SQLite refuses larger keys). */
+const LONG_DIGITS = /^[+-]?\d{16,}$/;
+
+interface Problem {
+  readonly property: string;
+  readonly constraints: Record<string, string>;
+}
+
+function flatten(errors: ValidationError[], prefix = ''): Problem[] {
   return errors.flatMap((e) => {
     const property = prefix ? `${prefix}.${e.property}` : e.property;
     const own = e.constraints ? [{ property, constraints: e.constraints }] : [];
@@ -11,9 +19,76 @@ function flatten(
   });
 }
 
+/**
+ * Looks at the raw input before class-transformer does (it recurses, and a body nested 3,000 deep
+ * overflowed the stack): too deep, or a whole number no id or count can be. Iterative, stops at the
+ * first problem.
+ */
+export function inputProblem(value: unknown, root: string, digitStrings: boolean): Problem | null {
+  const stack: { value: unknown; path: string; depth: number }[] = [{ value, path: '', depth: 0 }];
+  // A path 3,000 levels long is no help in a message: its start says where.
+  const name = (path: string) => (path.length > 80 ? `${path.slice(0, 80)}…` : path || root);
+  while (stack.length > 0) {
+    const item = stack.pop()!;
+    const v = item.value;
+    if (typeof v === 'number' && Number.isInteger(v) && !Number.isSafeInteger(v)) {
+      return {
+        property: name(item.path),
+        constraints: { safeInteger: `${name(item.path)} must be a whole number below 2^53, not ${v}` },
+      };
+    }
+    if (digitStrings && typeof v === 'string' && LONG_DIGITS.test(v.trim())) {
+      return {
+        property: name(item.path),
+        constraints: {
+          safeInteger: `${name(item.path)} must be a whole number below 2^53, not ${v.trim()}`,
+        },
+      };
+    }
+    if (v === null || typeof v !== 'object') continue;
+    if (item.depth >= MAX_INPUT_DEPTH) {
+      return {
+        property: name(item.path),
+        constraints: {
+          maxDepth: `${name(item.path)} nests more than ${MAX_INPUT_DEPTH} levels deep; no request needs that`,
+        },
+      };
+    }
+    for (const [key, child] of Object.entries(v)) {
+      const path = Array.isArray(v) ? `${item.path}[${key}]` : item.path ? `${item.path}.${key}` : key;
+      stack.push({ value: child, path, depth: item.depth + 1 });
+    }
+  }
+  return null;
+}
+
+const ROOT_NAMES: Record<ArgumentMetadata['type'], string> = {
+  body: 'the request body',
+  query: 'the query',
+  param: 'the path parameter',
+  custom: 'the input',
+};
+
 /** The global pipe: strips nothing silently (unknown fields are refused), converts types. */
+class LigamentValidationPipe extends ValidationPipe {
+  override async transform(value: unknown, metadata: ArgumentMetadata): Promise<unknown> {
+    if (metadata.type !== 'custom') {
+      const root = metadata.type === 'param' && metadata.data ? metadata.data : ROOT_NAMES[metadata.type];
+      // Query and path values arrive as text; JSON bodies carry real numbers (and titles may be digits).
+      const problem = inputProblem(value, root, metadata.type !== 'body');
+      if (problem) {
+        throw new BadRequestException({
+          message: Object.values(problem.constraints).join('; '),
+          details: [problem],
+        });
+      }
+    }
+    return super.transform(value, metadata);
+  }
+}
+
 export function createValidationPipe(): ValidationPipe {
-  return new ValidationPipe({
+  return new LigamentValidationPipe({
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,

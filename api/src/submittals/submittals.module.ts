@@ -25,6 +25,8 @@ import { SubmittalsService } from './submittals.service.js';
       inject: [uploadsConfig.KEY],
       useFactory: (limits: ConfigType<typeof uploadsConfig>) => ({
         limits: { fileSize: limits.maxFileBytes, files: limits.maxFiles, fields: 10 },
+        // Browsers and curl send a plain `filename` as UTF-8; busboy's default (latin1) double-encoded it.
+        defParamCharset: 'utf8',
       }),
     }),
     EventsModule,

@@ -10,6 +10,7 @@ import { User } from './models/user.model.js';
 export class UsersService {
   constructor(
     @InjectModel(User) private readonly users: typeof User,
+    @InjectModel(Organisation) private readonly organisations: typeof Organisation,
     private readonly reads: HotReadsService,
   ) {}
 
@@ -55,6 +56,12 @@ export class UsersService {
     if (!user) throw new NotFoundException(`No user ${id}.`);
     if (id === actor.id && (dto.active === false || (dto.role && dto.role !== user.role))) {
       throw new ConflictException('Admins cannot deactivate themselves or change their own role.');
+    }
+    if (
+      dto.organisationId !== undefined &&
+      !(await this.organisations.findByPk(dto.organisationId, { attributes: ['id'] }))
+    ) {
+      throw new NotFoundException(`No organisation ${dto.organisationId}.`);
     }
     await user.update(dto);
     return this.get(id);
