@@ -5,6 +5,7 @@ import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { EventsModule } from '../events/events.module.js';
 import { Organisation } from '../organisations/models/organisation.model.js';
 import { Submittal } from '../submittals/models/submittal.model.js';
+import { TokensModule } from '../tokens/tokens.module.js';
 import { User } from '../users/models/user.model.js';
 import { UsersModule } from '../users/users.module.js';
 import { ProjectMember } from './models/project-member.model.js';
@@ -18,6 +19,7 @@ import { ProjectsService } from './projects.service.js';
     AuthModule,
     UsersModule,
     EventsModule,
+    TokensModule,
   ],
   controllers: [ProjectsController],
   providers: [ProjectsService],

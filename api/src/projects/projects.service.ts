@@ -1,6 +1,7 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
-import { InjectModel } from '@nestjs/sequelize';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { Op } from 'sequelize';
+import type { Sequelize } from 'sequelize-typescript';
 import type { AuthUser } from '../auth/auth-user.js';
 import { ProjectAccessService } from '../auth/project-access.service.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
@@ -8,6 +9,7 @@ import { OPEN_STATUSES } from '../discrepancies/discrepancy-status.js';
 import { EventsService } from '../events/events.service.js';
 import { Organisation } from '../organisations/models/organisation.model.js';
 import { Submittal } from '../submittals/models/submittal.model.js';
+import { TokensService } from '../tokens/tokens.service.js';
 import { User } from '../users/models/user.model.js';
 import { UsersService } from '../users/users.service.js';
 import type { CreateProjectDto, ProjectDto, ProjectMemberDto, UpdateProjectDto } from './dto/project.dto.js';
@@ -17,6 +19,7 @@ import { Project } from './models/project.model.js';
 @Injectable()
 export class ProjectsService {
   constructor(
+    @InjectConnection() private readonly sequelize: Sequelize,
     @InjectModel(Project) private readonly projects: typeof Project,
     @InjectModel(ProjectMember) private readonly members: typeof ProjectMember,
     @InjectModel(Submittal) private readonly submittals: typeof Submittal,
@@ -26,6 +29,7 @@ export class ProjectsService {
     private readonly access: ProjectAccessService,
     private readonly users: UsersService,
     private readonly events: EventsService,
+    private readonly tokens: TokensService,
   ) {}
 
   async list(user: AuthUser): Promise<ProjectDto[]> {
@@ -91,14 +95,16 @@ export class ProjectsService {
     return this.listMembers(projectId);
   }
 
+  /** Removes the membership and revokes the user's API tokens for the project, in one transaction. */
   async removeMember(projectId: number, userId: number, actor: AuthUser): Promise<ProjectMemberDto[]> {
-    const removed = await this.members.destroy({ where: { projectId, userId } });
-    if (!removed) throw new NotFoundException(`User ${userId} is not a member of project ${projectId}.`);
-    await this.events.record({
-      type: 'project.member-removed',
-      actorId: actor.id,
-      projectId,
-      data: { userId },
+    await this.sequelize.transaction(async (transaction) => {
+      const removed = await this.members.destroy({ where: { projectId, userId }, transaction });
+      if (!removed) throw new NotFoundException(`User ${userId} is not a member of project ${projectId}.`);
+      const revokedTokenIds = await this.tokens.revokeForMembership(projectId, userId, actor, transaction);
+      await this.events.record(
+        { type: 'project.member-removed', actorId: actor.id, projectId, data: { userId, revokedTokenIds } },
+        transaction,
+      );
     });
     return this.listMembers(projectId);
   }

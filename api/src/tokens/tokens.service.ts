@@ -1,5 +1,6 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { AuthUser } from '../auth/auth-user.js';
 import { randomSecret, sha256Hex } from '../common/hash.js';
 import { EventsService } from '../events/events.service.js';
@@ -78,6 +79,38 @@ export class TokensService {
       });
     }
     return this.view(row);
+  }
+
+  /**
+   * Revokes every live token a user holds for a project: called when the user leaves the project, so
+   * a CI secret made while they were a member cannot outlive the membership. Answers the revoked ids.
+   */
+  async revokeForMembership(
+    projectId: number,
+    userId: number,
+    actor: AuthUser,
+    transaction?: Transaction,
+  ): Promise<number[]> {
+    const live = await this.tokens.findAll({
+      where: { projectId, userId, revokedAt: { [Op.is]: null } },
+      attributes: ['id'],
+      transaction,
+    });
+    if (live.length === 0) return [];
+    const ids = live.map((t) => t.id);
+    await this.tokens.update({ revokedAt: new Date() }, { where: { id: { [Op.in]: ids } }, transaction });
+    for (const tokenId of ids) {
+      await this.events.record(
+        {
+          type: 'token.revoked',
+          actorId: actor.id,
+          projectId,
+          data: { tokenId, reason: 'member-removed', userId },
+        },
+        transaction,
+      );
+    }
+    return ids;
   }
 
   private view(t: ApiToken): TokenDto {
