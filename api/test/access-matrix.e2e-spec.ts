@@ -290,7 +290,8 @@ const ROWS: Row[] = [
     path: () => '/api/mail/outbox/flush',
     allowed: ['admin'],
   },
-  { name: 'GET /mail/mailbox', method: 'get', path: () => '/api/mail/mailbox', allowed: ACTORS },
+  // The mailbox shows invitation links: admin only, even in demo mode.
+  { name: 'GET /mail/mailbox', method: 'get', path: () => '/api/mail/mailbox', allowed: ['admin'] },
 ];
 
 let t: TestApp;

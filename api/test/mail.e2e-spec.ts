@@ -23,7 +23,11 @@ const outbox = async () =>
     lastError: string | null;
   }[];
 const mailbox = async () =>
-  (await request(t.http).get('/api/mail/mailbox')).body as { to: string; subject: string; text: string }[];
+  (await request(t.http).get('/api/mail/mailbox').set(bearer(admin))).body as {
+    to: string;
+    subject: string;
+    text: string;
+  }[];
 
 describe('outbox with retry', () => {
   it('delivers the seed’s queued mail to the SMTP fake', async () => {

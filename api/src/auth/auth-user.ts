@@ -11,8 +11,10 @@ export interface AuthUser {
   readonly token?: { readonly id: number; readonly projectId: number };
 }
 
-/** JWT payload we sign. */
+/** JWT payload we sign; `iat` and `exp` are added by the signer and required on the way in. */
 export interface JwtPayload {
   readonly sub: number;
   readonly role: Role;
+  readonly iat?: number;
+  readonly exp?: number;
 }

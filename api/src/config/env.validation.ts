@@ -11,6 +11,7 @@ import {
   validateSync,
 } from 'class-validator';
 import { Type } from 'class-transformer';
+import { DEMO_JWT_SECRET } from './auth.config.js';
 
 /** Every environment variable the service reads. All optional: the defaults run the demo. */
 export class EnvironmentVariables {
@@ -41,12 +42,30 @@ export class EnvironmentVariables {
   @IsOptional() @IsIn(['error', 'warn', 'log', 'debug']) LOG_LEVEL?: string;
 }
 
+/**
+ * Outside demo mode the service must have its own signing secret: with the public demo secret anyone
+ * can forge a sign-in for any account. Demo mode keeps the default (and health reports it).
+ */
+function secretProblem(config: Record<string, unknown>): string | null {
+  const demo =
+    config.LIGAMENT_DEMO === undefined || config.LIGAMENT_DEMO === '' || config.LIGAMENT_DEMO === 'true';
+  if (demo) return null;
+  const secret = typeof config.JWT_SECRET === 'string' ? config.JWT_SECRET : '';
+  if (secret === '')
+    return 'required when LIGAMENT_DEMO=false: set 16+ random characters (e.g. the output of `openssl rand -base64 32`); without it sign-ins would be signed with the public demo secret';
+  if (secret === DEMO_JWT_SECRET)
+    return 'is the public demo secret, which anyone can use to forge sign-ins; set your own (16+ random characters) when LIGAMENT_DEMO=false';
+  return null;
+}
+
 /** ConfigModule `validate`: rejects a bad environment at start-up with every problem listed. */
 export function validateEnvironment(config: Record<string, unknown>): Record<string, unknown> {
   const parsed = plainToInstance(EnvironmentVariables, config, { enableImplicitConversion: false });
   const errors = validateSync(parsed, { skipMissingProperties: false, forbidUnknownValues: false });
-  if (errors.length > 0) {
-    const lines = errors.map((e) => `  ${e.property}: ${Object.values(e.constraints ?? {}).join('; ')}`);
+  const lines = errors.map((e) => `  ${e.property}: ${Object.values(e.constraints ?? {}).join('; ')}`);
+  const secret = secretProblem(config);
+  if (secret) lines.push(`  JWT_SECRET: ${secret}`);
+  if (lines.length > 0) {
     throw new Error(`Invalid environment:\n${lines.join('\n')}`);
   }
   return config;

@@ -8,6 +8,7 @@ import { uploadsConfig } from './uploads.config.js';
 export { appConfig, authConfig, databaseConfig, mailConfig, throttleConfig, uploadsConfig };
 export { DEMO_JWT_SECRET } from './auth.config.js';
 export { environmentProblem, validateEnvironment } from './env.validation.js';
+export { configWarnings } from './warnings.js';
 
 export const configNamespaces = [
   appConfig,

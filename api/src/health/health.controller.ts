@@ -1,8 +1,10 @@
-import { Controller, Get, Res } from '@nestjs/common';
+import { Controller, Get, Inject, Res } from '@nestjs/common';
+import type { ConfigType } from '@nestjs/config';
 import { ApiOkResponse, ApiOperation, ApiProperty, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import { ENGINE_VERSION } from 'ligament';
 import { Public } from '../auth/decorators/public.decorator.js';
+import { appConfig, authConfig, configWarnings } from '../config/index.js';
 import { DatabaseService } from '../database/database.service.js';
 import { MailService } from '../mail/mail.service.js';
 
@@ -26,6 +28,9 @@ class HealthDto {
   @ApiProperty() engineVersion: string;
   @ApiProperty({ type: DatabaseHealthDto }) database: DatabaseHealthDto;
   @ApiProperty({ type: MailHealthDto }) mail: MailHealthDto;
+  @ApiProperty({ description: 'Demo mode: seeded data, demo mailbox (admin), demo sign-ins' }) demo: boolean;
+  @ApiProperty({ type: [String], description: 'Unsafe settings, e.g. the public demo JWT secret' })
+  warnings: string[];
 }
 
 @ApiTags('health')
@@ -34,6 +39,8 @@ export class HealthController {
   constructor(
     private readonly database: DatabaseService,
     private readonly mail: MailService,
+    @Inject(authConfig.KEY) private readonly auth: ConfigType<typeof authConfig>,
+    @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
   ) {}
 
   @Get()
@@ -57,6 +64,7 @@ export class HealthController {
         };
     const status = !database.ok ? 'down' : mail.ok ? 'ok' : 'degraded';
     if (status === 'down') res.status(503);
-    return { status, engineVersion: ENGINE_VERSION, database, mail };
+    const warnings = configWarnings(this.auth);
+    return { status, engineVersion: ENGINE_VERSION, database, mail, demo: this.app.demo, warnings };
   }
 }

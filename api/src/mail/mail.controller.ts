@@ -2,7 +2,6 @@ import { Controller, Get, Inject, NotFoundException, Post } from '@nestjs/common
 import type { ConfigType } from '@nestjs/config';
 import { InjectModel } from '@nestjs/sequelize';
 import { ApiBearerAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
-import { Public } from '../auth/decorators/public.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { Role } from '../auth/role.enum.js';
 import { appConfig } from '../config/index.js';
@@ -22,9 +21,11 @@ export class MailController {
   ) {}
 
   @Get('mailbox')
-  @Public()
+  @ApiBearerAuth()
+  @Roles(Role.Admin)
   @ApiOperation({
-    summary: 'Demo mode only: every message the local SMTP fake received, newest first (404 otherwise)',
+    summary:
+      'Admin, demo mode only: every message the local SMTP fake received, newest first (404 otherwise). Invitation links are in these mails, so only an admin may read them.',
   })
   @ApiOkResponse({ type: [MailboxMessageDto] })
   async listMailbox(): Promise<MailboxMessageDto[]> {
