@@ -6,11 +6,14 @@ import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js
 
 /**
  * Detailing under the EN 1993-1-1 and CSA S16-19 profiles, per flat element: EN 1993-1-8 Table 3.3
- * minima e1, e2 ≥ 1.2 d0, p1 ≥ 2.2 d0, p2 ≥ 2.4 d0 (LG204) and maxima e ≤ 4t + 40 mm,
- * p ≤ min(14t, 200 mm) (LG205); CSA S16 22.3.1 pitch ≥ 2.7 d (LG206, from memory as the profile
- * notes). e2 is measured to the element's free edges only; e1 is the block-shear end distance when one
- * is given (calc files carry no member ends otherwise). p1 is the least pitch along a gauge line, p2 the
- * least spacing of adjacent gauge lines.
+ * minima e1, e2 ≥ 1.2 d0, p1 ≥ 2.2 d0, p2 ≥ 2.4 d0 — staggered lines p2 ≥ 1.2 d0 with L ≥ 2.4 d0
+ * (note 5) — (LG204) and maxima e ≤ 4t + 40 mm, p ≤ min(14t, 200 mm) (LG205), which note 1 applies
+ * to tension members only when exposed to the weather or corrosion: calc files do not say, so LG205
+ * is not raised from a file today; CSA S16 22.3.1 centre-to-centre spacing ≥ 2.7 d (LG206). e2 is
+ * measured from the gauge line nearest each free edge of the element (holes next to an edge); e1 is
+ * the block-shear end distance when one is given (calc files carry no member ends otherwise). p1 is
+ * the least pitch along a gauge line, p2 the least spacing of adjacent gauge lines, L the least
+ * centre-to-centre distance.
  *
  * @param member - the member
  * @param profile - an EN 1993-1-1 or CSA S16-19 profile (others give no findings)
@@ -34,11 +37,13 @@ export function profileDetailingFindings(
     const holes = group.holes;
     if (holes.length === 0) continue;
     const spacings = holeSpacings(holes, group.width);
-    // Each hole's distance to its nearer free edge (a hole has one edge distance, not two).
-    const edges = holes.flatMap((h) => {
-      const free = [...(group.free.low ? [h.y] : []), ...(group.free.high ? [group.width - h.y] : [])];
-      return free.length ? [Math.min(...free)] : [];
-    });
+    // Edge distances belong to the holes next to a free edge: the gauge line nearest each free edge
+    // (a hole on an inner line has neighbours between it and the edge, not an edge distance).
+    const ys = holes.map((h) => h.y);
+    const edges = [
+      ...(group.free.low ? [Math.min(...ys)] : []),
+      ...(group.free.high ? [group.width - Math.max(...ys)] : []),
+    ];
     const bolts = holes.map((h) => h.boltDiameter).filter((d): d is number => d !== undefined);
     const e1 = member.blockShear?.endDistance;
     const eMax = Math.max(...(edges.length ? edges : [0]), e1 ?? 0);
@@ -50,6 +55,8 @@ export function profileDetailingFindings(
       ...(edges.length ? { e2: Math.min(...edges) } : {}),
       ...(spacings.p1 !== undefined ? { p1: spacings.p1 } : {}),
       ...(spacings.p2 !== undefined ? { p2: spacings.p2 } : {}),
+      ...(spacings.p2Staggered !== undefined ? { p2Staggered: spacings.p2Staggered } : {}),
+      ...(spacings.L !== undefined ? { L: spacings.L } : {}),
       ...(eMax > 0 ? { eMax } : {}),
       ...(spacings.pMax !== undefined ? { pMax: spacings.pMax } : {}),
     });

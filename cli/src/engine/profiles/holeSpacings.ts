@@ -12,8 +12,15 @@ export interface HoleSpacings {
   readonly e2?: number;
   /** Least spacing along the load between holes on one gauge line. */
   readonly p1?: number;
-  /** Least spacing across the load between adjacent gauge lines. */
+  /** Least spacing across the load between adjacent gauge lines whose holes are in line (share an x). */
   readonly p2?: number;
+  /**
+   * Least spacing across the load between adjacent gauge lines that are staggered (no hole of one
+   * line at the x of a hole of the other): EN 1993-1-8 Table 3.3 note 5 relaxes p2 for these.
+   */
+  readonly p2Staggered?: number;
+  /** Least centre-to-centre distance between any two holes. */
+  readonly L?: number;
   /** Greatest end or edge distance. */
   readonly eMax?: number;
   /** Greatest spacing between neighbouring holes along a line or across adjacent lines. */
@@ -23,7 +30,8 @@ export interface HoleSpacings {
 /**
  * The spacings detailing rules read, measured from a hole pattern: e2 to the longitudinal edges y = 0
  * and y = width, e1 to the ends x = ends[0] and x = ends[1] when given, p1 along each gauge line, p2
- * between adjacent gauge lines (common practice reading of EN 1993-1-8 Fig. 3.1 for regular patterns).
+ * between adjacent gauge lines (common practice reading of EN 1993-1-8 Fig. 3.1 for regular patterns),
+ * kept apart as p2Staggered when the two lines are staggered, and L the least centre-to-centre distance.
  *
  * @param holes - hole centres
  * @param width - width across the load
@@ -31,7 +39,7 @@ export interface HoleSpacings {
  * @returns the spacings found (absent where the pattern has none)
  * @example
  * holeSpacings([{ x: 40, y: 30 }, { x: 110, y: 30 }, { x: 40, y: 90 }], 120, [0, 300])
- * // → { e1: 40, e2: 30, p1: 70, p2: 60, eMax: 40, pMax: 70 }
+ * // → { e1: 40, e2: 30, p1: 70, p2: 60, L: 60, eMax: 40, pMax: 70 }
  */
 export function holeSpacings(
   holes: readonly SpacingHole[],
@@ -68,15 +76,27 @@ export function holeSpacings(
     }
   }
   let p2 = Number.POSITIVE_INFINITY;
+  let p2Staggered = Number.POSITIVE_INFINITY;
   for (let i = 1; i < ys.length; i++) {
-    p2 = Math.min(p2, ys[i]! - ys[i - 1]!);
-    pMax = Math.max(pMax, ys[i]! - ys[i - 1]!);
+    const gap = ys[i]! - ys[i - 1]!;
+    const inLine = lines[i]!.some((x) => lines[i - 1]!.some((x0) => Math.abs(x - x0) <= eps));
+    if (inLine) p2 = Math.min(p2, gap);
+    else p2Staggered = Math.min(p2Staggered, gap);
+    pMax = Math.max(pMax, gap);
+  }
+  let L = Number.POSITIVE_INFINITY;
+  for (let i = 0; i < holes.length; i++) {
+    for (let j = i + 1; j < holes.length; j++) {
+      L = Math.min(L, Math.hypot(holes[j]!.x - holes[i]!.x, holes[j]!.y - holes[i]!.y));
+    }
   }
   return {
     ...(e1 === undefined ? {} : { e1 }),
     e2,
     ...(Number.isFinite(p1) ? { p1 } : {}),
     ...(Number.isFinite(p2) ? { p2 } : {}),
+    ...(Number.isFinite(p2Staggered) ? { p2Staggered } : {}),
+    ...(Number.isFinite(L) ? { L } : {}),
     eMax,
     ...(pMax > 0 ? { pMax } : {}),
   };

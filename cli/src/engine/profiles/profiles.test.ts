@@ -115,9 +115,17 @@ describe('EN 1993-1-1 profile', () => {
 
   it('EN 1993-1-8 Table 3.3 (published): e1, e2 ≥ 1.2 d0, p1 ≥ 2.2 d0, p2 ≥ 2.4 d0, e ≤ 4t + 40, p ≤ min(14t, 200)', () => {
     const d0 = 22;
-    const limits = en1993Detailing({ d0, t: 10, e1: 26, e2: 26, p1: 48, p2: 52, eMax: 81, pMax: 141 }).map(
-      (i) => [i.quantity, i.kind, i.limit],
-    );
+    const limits = en1993Detailing({
+      d0,
+      t: 10,
+      e1: 26,
+      e2: 26,
+      p1: 48,
+      p2: 52,
+      eMax: 81,
+      pMax: 141,
+      exposed: true,
+    }).map((i) => [i.quantity, i.kind, i.limit]);
     expect(limits).toEqual([
       ['e1', 'minimum', expect.closeTo(26.4, 9)],
       ['e2', 'minimum', expect.closeTo(26.4, 9)],
@@ -127,9 +135,29 @@ describe('EN 1993-1-1 profile', () => {
       ['p', 'maximum', 140],
     ]);
     expect(
-      en1993Detailing({ d0, t: 20, e1: 26.4, e2: 26.4, p1: 48.4, p2: 52.8, eMax: 120, pMax: 200 }),
+      en1993Detailing({ d0, t: 20, e1: 26.4, e2: 26.4, p1: 48.4, p2: 52.8, eMax: 120, pMax: 200, exposed: true }),
     ).toEqual([]);
-    expect(en1993Detailing({ d0, t: 20, pMax: 201 })[0]?.limit).toBe(200);
+    expect(en1993Detailing({ d0, t: 20, pMax: 201, exposed: true })[0]?.limit).toBe(200);
+  });
+
+  it('EN 1993-1-8 Table 3.3 note 1 (from memory): maxima apply to a tension member only when exposed to weather or corrosion', () => {
+    // Before: e 81 > 80 and p 141 > 140 were warned for every member (LG205) whatever its exposure.
+    expect(en1993Detailing({ d0: 22, t: 10, eMax: 81, pMax: 141 })).toEqual([]);
+    expect(en1993Detailing({ d0: 22, t: 10, eMax: 81, pMax: 141, exposed: false })).toEqual([]);
+  });
+
+  it('EN 1993-1-8 Table 3.3 note 5 (from memory): staggered rows may have p2 ≥ 1.2 d0 when L ≥ 2.4 d0', () => {
+    // M20, d0 22: staggered lines 30 mm apart (≥ 26.4) with centres 60 mm apart (≥ 52.8) pass; before,
+    // p2 30 < 2.4 d0 = 52.8 was warned.
+    expect(en1993Detailing({ d0: 22, p2Staggered: 30, L: 60 })).toEqual([]);
+    expect(
+      en1993Detailing({ d0: 22, p2Staggered: 25, L: 50 }).map((i) => [i.quantity, i.limit]),
+    ).toEqual([
+      ['p2', expect.closeTo(26.4, 9)],
+      ['L', expect.closeTo(52.8, 9)],
+    ]);
+    // Lines in line (not staggered) keep p2 ≥ 2.4 d0.
+    expect(en1993Detailing({ d0: 22, p2: 30 }).map((i) => i.quantity)).toEqual(['p2']);
   });
 
   it('measures spacings from a hole pattern for the rules', () => {
@@ -142,8 +170,19 @@ describe('EN 1993-1-1 profile', () => {
       120,
       [0, 300],
     );
-    expect(s).toEqual({ e1: 40, e2: 30, p1: 70, p2: 60, eMax: 40, pMax: 70 });
+    expect(s).toEqual({ e1: 40, e2: 30, p1: 70, p2: 60, L: 60, eMax: 40, pMax: 70 });
     expect(en1993Detailing({ d0: 22, ...s })).toEqual([]);
+    // Two staggered lines 30 apart: no hole of one at the x of a hole of the other.
+    const staggered = holeSpacings(
+      [
+        { x: 0, y: 40 },
+        { x: 100, y: 40 },
+        { x: 50, y: 70 },
+      ],
+      110,
+    );
+    expect(staggered).toMatchObject({ p1: 100, p2Staggered: 30, L: Math.hypot(50, 30) });
+    expect(staggered.p2).toBeUndefined();
   });
 });
 
@@ -187,6 +226,15 @@ describe('CSA S16-19 profile', () => {
     expect(
       csaS16EffectiveNetArea({ An: 1000, shape: 'w-flange', transverseLines: 3, bf: 200, d: 300 }).factor,
     ).toBe(0.9);
+  });
+
+  it('centre-to-centre spacing ≥ 2.7 d, not gauge-line distance (CSA S16 22.3.1; R3 published 2.7d)', () => {
+    // M20 staggered: gauge lines 40 mm apart (< 54) but centres 64 mm apart: a good detail; before, p2
+    // 40 < 54 was warned (LG206).
+    expect(csaS16Detailing({ d0: 22, boltDiameter: 20, p2Staggered: 40, L: 64 })).toEqual([]);
+    expect(csaS16Detailing({ d0: 22, boltDiameter: 20, L: 50 }).map((i) => [i.quantity, i.limit])).toEqual([
+      ['L', expect.closeTo(54, 9)],
+    ]);
   });
 
   it('pitch ≥ 2.7 d (R3, published); hole deducted = hole + 2 mm', () => {

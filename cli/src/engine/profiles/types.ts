@@ -73,8 +73,18 @@ export interface DetailingInput {
   readonly e2?: number;
   /** Least spacing along the load (pitch). */
   readonly p1?: number;
-  /** Least spacing across the load (gauge). */
+  /** Least spacing across the load (gauge) between adjacent lines whose holes are in line. */
   readonly p2?: number;
+  /** Least spacing across the load between adjacent staggered lines (EN 1993-1-8 Table 3.3 note 5). */
+  readonly p2Staggered?: number;
+  /** Least centre-to-centre distance between any two holes. */
+  readonly L?: number;
+  /**
+   * Whether the member is exposed to the weather or other corrosive influences: EN 1993-1-8 Table 3.3
+   * maxima apply to a tension member only then (note 1, from memory). Calc files do not say; absent,
+   * the maxima are not checked.
+   */
+  readonly exposed?: boolean;
   /** Greatest end or edge distance (for the maximum rule). */
   readonly eMax?: number;
   /** Greatest spacing (for the maximum rule). */
@@ -83,7 +93,7 @@ export interface DetailingInput {
 
 /** One detailing rule a layout breaks. */
 export interface DetailingIssue {
-  readonly quantity: 'e1' | 'e2' | 'p1' | 'p2' | 'e' | 'p';
+  readonly quantity: 'e1' | 'e2' | 'p1' | 'p2' | 'L' | 'e' | 'p';
   readonly kind: 'minimum' | 'maximum';
   readonly value: number;
   readonly limit: number;
