@@ -273,6 +273,8 @@ export function normaliseDocument(raw: Raw): { document: CalcDocument; issues: S
       }
       if (rawBlock['Ubs'] !== undefined) block.Ubs = rawBlock['Ubs'] as 1 | 0.5;
       if (rawBlock['Ut'] !== undefined) block.Ut = rawBlock['Ut'] as number;
+      if (rawBlock['byOutline'] !== undefined)
+        block.byOutline = { ...(rawBlock['byOutline'] as Record<string, number>) };
       input.blockShear = block;
     }
 

@@ -42,6 +42,26 @@ describe('loadCalcText: section members', () => {
     expect(doc.members[0]!.claims?.blockShear).toBe(81.1);
   });
 
+  it('reads block shear tension factors per outline kind, and rejects an unknown kind by pointer', () => {
+    const ok = loaded(
+      loadCalcText(
+        variant(
+          'lantern-brace-angle.json',
+          (d) => (d['members'][0].blockShear.byOutline = { 'to-edge': 0.6 }),
+        ),
+        'brace.json',
+      ),
+    );
+    expect(ok.members[0]!.input.blockShear).toEqual({ endDistance: 1.5, byOutline: { 'to-edge': 0.6 } });
+    const errors = failed(
+      loadCalcText(
+        variant('lantern-brace-angle.json', (d) => (d['members'][0].blockShear.byOutline = { 'u-shape': 1 })),
+        'brace.json',
+      ),
+    );
+    expect(errors.some((e) => e.pointer.startsWith('/members/0/blockShear/byOutline'))).toBe(true);
+  });
+
   it('reads the EN 1993-1-1 and CSA S16-19 profiles, with National Annex factors', () => {
     const en = loaded(
       loadCalcText(

@@ -66,7 +66,7 @@ describe('analyseMember: members of flat elements', () => {
       expect(Math.abs(b[k] - v), k).toBeLessThanOrEqual(0.01);
     }
     expect(Math.abs(b.available - 706)).toBeLessThanOrEqual(0.5);
-    expect(b.parts.map((p) => [p.element, p.kind])).toEqual([['leg-a', 'one-plane-to-high-edge']]);
+    expect(b.parts.map((p) => [p.element, p.kind])).toEqual([['leg-a', 'to-edge']]);
   });
 
   it('gives a mirrored angle (legs swapped, holes in the other leg) the same net area, U and block shear', () => {

@@ -46,6 +46,24 @@ describe('auditMember: block shear, sections and the EN / CSA profiles', () => {
     expect(codes(under)).toEqual(expect.arrayContaining(['LG117', 'LG116', 'LG113']));
   });
 
+  it('compares claimed block shear areas with the outline they describe, the strength with the governing one', () => {
+    // By hand (common practice): the block through the heel and the whole other leg, one shear plane
+    // along the bolts: Agt (2.5 + 3.625)·0.375 = 2.2969, Ant 2.2969 − 0.4375·0.375 = 2.1328 in²;
+    // φRn = 0.75 [min(97.06, 85.05) + 58·2.1328] = 156.6 kips, above the governing 81.12 kips.
+    const a = audit(brace, AISC, { Agv: 3.9375, Anv: 2.789, Agt: 2.297, Ant: 2.133, blockShear: 156.6 });
+    expect(codes(a)).not.toContain('LG107');
+    expect(codes(a)).toContain('LG106');
+    expect(a.findings.find((f) => f.code === 'LG106')!.recomputed).toBeCloseTo(81.1195, 3);
+    // The governing outline's own areas, one of them off: LG107 against that outline.
+    const b = audit(brace, AISC, { Agv: 3.9375, Agt: 0.5625, Ant: 0.45 });
+    expect(codes(b).filter((c) => c === 'LG107')).toHaveLength(1);
+    expect(b.findings.find((f) => f.code === 'LG107')!.message).toContain('outline to-edge');
+  });
+
+  it('a correct claim governed by block shear is no finding (the governing strength includes it)', () => {
+    expect(codes(audit(brace, AISC, { available: 81.12, blockShear: 81.12 }))).toEqual([]);
+  });
+
   it('LG132 when block shear is below the tensile strengths and nothing claimed allows for it', () => {
     const a = audit(brace, AISC, { An: 2.532 });
     expect(codes(a)).toContain('LG132');

@@ -10,7 +10,15 @@ import { memberChainTools } from './memberChainTools.js';
 import { profileDetailingFindings } from './profileDetailingFindings.js';
 import { sectionDetailingFindings } from './sectionDetailingFindings.js';
 import { withinTolerance, DEFAULT_TOLERANCE } from './withinTolerance.js';
-import type { Chain, CodeProfile, Finding, FindingClass, LoadDirection, MemberResult } from './types.js';
+import type {
+  Chain,
+  CodeProfile,
+  Finding,
+  FindingClass,
+  LoadDirection,
+  MemberBlockOutline,
+  MemberResult,
+} from './types.js';
 
 type ScalarClaim = Exclude<keyof MemberClaims, 'chains' | 'controllingChain'>;
 
@@ -51,13 +59,42 @@ function percent(claimed: number, recomputed: number): string {
   return ` by ${((Math.abs(claimed - recomputed) / Math.abs(recomputed)) * 100).toFixed(1)} %`;
 }
 
-function recomputedScalar(key: ScalarClaim, result: MemberResult): number | undefined {
+const BLOCK_AREAS = ['Agv', 'Anv', 'Agt', 'Ant'] as const;
+
+/**
+ * The outline whose areas the claimed block shear areas describe: of the least outlines kept, the one
+ * nearest to every claimed area (largest relative difference least), so a claim for another outline
+ * than the governing one is compared with that outline's own areas; the governing one without area
+ * claims.
+ */
+function claimedOutline(result: MemberResult, claims: MemberClaims): MemberBlockOutline | undefined {
+  const block = result.blockShear;
+  if (!block) return undefined;
+  const keys = BLOCK_AREAS.filter((k) => claims[k] !== undefined);
+  let best = block.outlines[0];
+  let bestGap = Number.POSITIVE_INFINITY;
+  for (const o of block.outlines) {
+    let gap = 0;
+    for (const k of keys) gap = Math.max(gap, Math.abs(claims[k]! - o[k]) / Math.max(Math.abs(o[k]), 1e-12));
+    if (gap < bestGap) {
+      bestGap = gap;
+      best = o;
+    }
+  }
+  return best;
+}
+
+function recomputedScalar(
+  key: ScalarClaim,
+  result: MemberResult,
+  outline: MemberBlockOutline | undefined,
+): number | undefined {
   switch (key) {
     case 'Agv':
     case 'Anv':
     case 'Agt':
     case 'Ant':
-      return result.blockShear?.[key];
+      return outline?.[key];
     case 'blockShear':
       return result.blockShear?.available;
     case 'Ag':
@@ -82,7 +119,10 @@ function sameHoles(a: readonly string[], b: readonly string[]): boolean {
   return a.length === b.length && a.every((id, i) => id === b[i]);
 }
 
-function context(result: MemberResult, key: ScalarClaim): string {
+function context(result: MemberResult, key: ScalarClaim, outline: MemberBlockOutline | undefined): string {
+  if ((BLOCK_AREAS as readonly string[]).includes(key) && outline) {
+    return ` (outline ${outline.kind}: ${outline.description}, ${formatDirection(outline.direction)})`;
+  }
   if (key === 'available' && result.governing.limitState === 'block shear' && result.blockShear) {
     return ` (block shear governs, ${result.blockShear.clause})`;
   }
@@ -143,10 +183,11 @@ export function auditMember(
   }
 
   const claims = calcMember.claims ?? {};
+  const outline = claimedOutline(result, claims);
   for (const { key, codes, dimension, label } of SCALARS) {
     const claimed = claims[key];
     if (claimed === undefined) continue;
-    const recomputed = recomputedScalar(key, result);
+    const recomputed = recomputedScalar(key, result, outline);
     if (recomputed === undefined) continue;
     if (withinTolerance(claimed, recomputed, dimension, tolerance)) continue;
     const over = claimed > recomputed;
@@ -155,7 +196,7 @@ export function auditMember(
         ...at,
         claimed,
         recomputed,
-        message: `Claimed ${label} ${formatQuantity(claimed, dimension, u)} ${over ? 'exceeds' : 'is below'} the recomputed ${formatQuantity(recomputed, dimension, u)}${context(result, key)}${percent(claimed, recomputed)}`,
+        message: `Claimed ${label} ${formatQuantity(claimed, dimension, u)} ${over ? 'exceeds' : 'is below'} the recomputed ${formatQuantity(recomputed, dimension, u)}${context(result, key, outline)}${percent(claimed, recomputed)}`,
         pointer: `${base}/claims/${key}`,
       }),
     );

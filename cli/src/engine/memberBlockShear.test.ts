@@ -40,6 +40,43 @@ describe('memberBlockShear', () => {
     expect(memberBlockShear(m, LRFD, widths(m), ['-x', '+x'])!.direction).toBe('-x');
   });
 
+  it('-x tears toward the +x end: 3 + 2 bolts, the short line at the free end (AISC 360 J4.3, by hand)', () => {
+    // 10 × 1/2 plate, A36, 3/4 in bolts (0.875 deducted): line y = 3 at x = 0, 3, 6; line y = 7 at
+    // x = 3, 6; end distance 1.5, so the free end is x = 7.5. Each line's hole nearest the body (−x)
+    // takes the tension plane: a1 (x 0) and b1 (x 3), s = 3, g = 4. Least outline by hand: to the
+    // y = 0 edge, shear along y = 7 only (4.5 in, 1.5 holes), tension 7 in less 1.5 holes plus 9/16:
+    // Rn = min(0.6·58·1.59375, 0.6·36·2.25) + 58·(7 − 1.3125 + 0.5625)·0.5 = 48.6 + 181.25.
+    const m: MemberInput = {
+      ...plate([]),
+      directions: ['-x'],
+      holes: [
+        ...[0, 3, 6].map((x, i) => ({
+          id: `a${i + 1}`,
+          x,
+          y: 3,
+          boltDiameter: 0.75,
+          type: 'standard' as const,
+        })),
+        ...[3, 6].map((x, i) => ({
+          id: `b${i + 1}`,
+          x,
+          y: 7,
+          boltDiameter: 0.75,
+          type: 'standard' as const,
+        })),
+      ],
+    };
+    const r = memberBlockShear(m, LRFD, widths(m), ['-x'])!;
+    const u = r.outlines.find((o) => o.kind === 'two-plane')!;
+    expect(u.tensionHoles).toEqual(['a1', 'b1']);
+    expect(u.Agv).toBeCloseTo((7.5 + 4.5) * 0.5, 12);
+    expect(r.kind).toBe('to-edge');
+    expect([r.Agv, r.Anv, r.Agt, r.Ant]).toEqual([2.25, 1.59375, 3.5, 3.125]);
+    expect(r.available).toBeCloseTo(0.75 * (48.6 + 181.25), 9);
+    // The old reading (free end at x = −1.5, tension at a3 and b2) gave 184.45 kips, 7.0 % over.
+    for (const o of r.outlines) expect(o.available).toBeGreaterThanOrEqual(r.available);
+  });
+
   it('is undefined without block-shear input or without holes', () => {
     const { blockShear, ...bare } = plate([0, 3]);
     void blockShear;

@@ -122,6 +122,11 @@ export interface BlockShearSpec {
   readonly Ubs?: 1 | 0.5;
   /** CSA S16 13.11 efficiency factor Ut (default 1.0). */
   readonly Ut?: number;
+  /**
+   * Tension factor (AISC Ubs, CSA Ut; EN below 1 means eccentric) of particular outline kinds, e.g.
+   * `{ "to-edge": 0.6 }` for an angle's L-shaped block under CSA S16; kinds not named take Ubs / Ut.
+   */
+  readonly byOutline?: Readonly<Record<string, number>>;
 }
 
 /** A member as the engine sees it. */
@@ -306,6 +311,25 @@ export interface MemberShearLag {
   readonly netArea?: { readonly area: number; readonly clause: string; readonly basis: string };
 }
 
+/** One block outline of a member with its areas and strength (all pieces). */
+export interface MemberBlockOutline {
+  readonly direction: LoadDirection;
+  /** `two-plane`, `to-edge`, `to-edges`, each with `+root` when a plane cuts an element's root. */
+  readonly kind: string;
+  /** The shear planes and tension spans in words. */
+  readonly description: string;
+  readonly Agv: number;
+  readonly Anv: number;
+  readonly Agt: number;
+  readonly Ant: number;
+  /** The outline's own tension factor (Ubs, Ut, or EN's 1 / 0.5). */
+  readonly tensionFactor: number;
+  readonly nominal: number;
+  readonly available: number;
+  readonly tensionHoles: readonly string[];
+  readonly source: 'code' | 'project-defined';
+}
+
 /** Block shear areas and strength of one tear-out (all elements and pieces torn out together). */
 export interface MemberBlockShear {
   readonly direction: LoadDirection;
@@ -317,7 +341,12 @@ export interface MemberBlockShear {
   readonly factor: number;
   readonly available: number;
   readonly clause: string;
-  /** The governing outline of each connected element's layout. */
+  /** Kind and words of the governing outline (see {@link MemberBlockOutline}). */
+  readonly kind: string;
+  readonly description: string;
+  /** The governing outline's tension factor. */
+  readonly tensionFactor: number;
+  /** The elements the governing outline runs through, each with the outline's values. */
   readonly parts: readonly {
     readonly element: string;
     readonly kind: string;
@@ -328,6 +357,8 @@ export interface MemberBlockShear {
   }[];
   /** True when any part's tension plane is staggered (project-defined). */
   readonly projectDefined: boolean;
+  /** The least outlines over the directions checked (up to 10), least first; the first governs. */
+  readonly outlines: readonly MemberBlockOutline[];
 }
 
 export type Severity = 'error' | 'warning' | 'note';

@@ -6,7 +6,7 @@ export interface BlockShearAiscInput {
   readonly Fy: number;
   readonly Fu: number;
   /** 1.0 when the tension stress is uniform, 0.5 when it is not (AISC 360 J4.3). */
-  readonly Ubs: 1 | 0.5;
+  readonly Ubs: number;
   readonly method: 'LRFD' | 'ASD';
   /** `mm` divides MPa·mm² by 1000 to give kN; `in` gives kip. */
   readonly units: 'in' | 'mm';
@@ -26,6 +26,8 @@ export interface BlockShearAiscInput {
  */
 export function blockShearAisc(areas: BlockShearAreas, input: BlockShearAiscInput): BlockShearStrength {
   if (!(input.Fy > 0 && input.Fu > 0)) throw new BlockShearError('Fy and Fu must be positive');
+  if (!(input.Ubs > 0 && input.Ubs <= 1))
+    throw new BlockShearError(`Ubs must be in (0, 1], got ${input.Ubs}`);
   const scale = input.units === 'mm' ? 1e-3 : 1;
   const tension = input.Ubs * input.Fu * areas.Ant;
   const rupture = 0.6 * input.Fu * areas.Anv;
@@ -41,5 +43,6 @@ export function blockShearAisc(areas: BlockShearAreas, input: BlockShearAiscInpu
         ? 'shear yielding (0.60 Fy Agv) with tension rupture'
         : 'shear rupture (0.60 Fu Anv) with tension rupture',
     clause: 'AISC 360 J4.3',
+    tensionFactor: input.Ubs,
   };
 }

@@ -15,12 +15,22 @@ export interface BlockShearCsaInput {
   readonly Ut: number;
   /** φu, default 0.75 (CSA S16, as in REFERENCES R3). */
   readonly phiU?: number;
+  /**
+   * Edition of CSA S16, for the yield stress above which Fy replaces (Fy + Fu)/2 in the shear term:
+   * 485 MPa in S16-09 (as coded in N. Holtz's CIVE 3205 notebooks, published); 460 MPa in S16-14 and
+   * S16-19 (from memory; the same 460 MPa as a public equation package codes S16:24). Default S16-19.
+   */
+  readonly edition?: 'S16-09' | 'S16-14' | 'S16-19';
 }
+
+/** Yield stress above which Fy replaces (Fy + Fu)/2, MPa, by edition (see {@link BlockShearCsaInput}). */
+export const CSA_SHEAR_STRESS_LIMIT = { 'S16-09': 485, 'S16-14': 460, 'S16-19': 460 } as const;
 
 /**
  * Block shear resistance, CSA S16 13.11 (SI, kN): Tr = φu [Ut An Fu + 0.6 Agv (Fy + Fu)/2], with Fy in
- * place of (Fy + Fu)/2 when Fy > 485 MPa. The form and the 485 MPa limit are as N. Holtz's CSA S16-09
- * course notebooks (Carleton University, CIVE 3205) code clause 13.11.
+ * place of (Fy + Fu)/2 above a yield stress that depends on the edition: 485 MPa in S16-09 (as
+ * N. Holtz's CSA S16-09 course notebooks, Carleton University, CIVE 3205, code clause 13.11), 460 MPa
+ * in S16-14 and S16-19 (from memory).
  *
  * @param areas - Ant (the tension net area An of the clause) and Agv, mm²
  * @param input - Fy, Fu, Ut, φu
@@ -35,14 +45,18 @@ export function blockShearCsa(areas: BlockShearAreas, input: BlockShearCsaInput)
   if (!(input.Fy > 0 && input.Fu > 0 && input.Ut > 0 && input.Ut <= 1 && phiU > 0)) {
     throw new BlockShearError('Fy, Fu and φu must be positive and Ut in (0, 1]');
   }
-  const shearStress = input.Fy > 485 ? input.Fy : (input.Fy + input.Fu) / 2;
+  const limit = CSA_SHEAR_STRESS_LIMIT[input.edition ?? 'S16-19'];
+  const shearStress = input.Fy > limit ? input.Fy : (input.Fy + input.Fu) / 2;
   const nominal = (input.Ut * areas.Ant * input.Fu + 0.6 * areas.Agv * shearStress) / 1000;
   return {
     nominal,
     factor: phiU,
     available: phiU * nominal,
     governs:
-      input.Fy > 485 ? 'tension rupture with shear at Fy' : 'tension rupture with shear at (Fy + Fu)/2',
-    clause: 'CSA S16 13.11',
+      input.Fy > limit
+        ? `tension rupture with shear at Fy (Fy > ${limit} MPa)`
+        : 'tension rupture with shear at (Fy + Fu)/2',
+    clause: `CSA ${input.edition ?? 'S16-19'} 13.11`,
+    tensionFactor: input.Ut,
   };
 }

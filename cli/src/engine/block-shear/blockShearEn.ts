@@ -41,5 +41,6 @@ export function blockShearEn(areas: BlockShearAreas, input: BlockShearEnInput): 
     available: value,
     governs: input.loading === 'concentric' ? 'Veff,1,Rd (concentric)' : 'Veff,2,Rd (eccentric)',
     clause: input.loading === 'concentric' ? 'EN 1993-1-8 3.10.2(2)' : 'EN 1993-1-8 3.10.2(3)',
+    tensionFactor: k,
   };
 }

@@ -1,37 +1,60 @@
 /**
- * Block shear: types shared by the outline proposals and the three codes' strength forms. Lengths and
+ * Block shear: types shared by the outline search and the three codes' strength forms. Lengths and
  * areas in the calc file's unit; forces in kip (`in`) or kN (`mm`).
  */
 
 import type { LoadDirection } from '../types.js';
 
-/** A hole of the connected element, placed in its flat layout. */
+/** A flat element of the cross-section (a plate is one element; a section has several). */
+export interface BlockElement {
+  readonly id: string;
+  readonly thickness: number;
+  /** Length of the centreline; positions `u` on it run over [0, span]. */
+  readonly span: number;
+  /**
+   * Material of the element beyond its centreline ends, so the element owns [−extendLow,
+   * span + extendHigh] of the cross-section (negative where another element owns the overlap: a
+   * channel flange starts at the web's face). Default 0.
+   */
+  readonly extendLow?: number;
+  readonly extendHigh?: number;
+}
+
+/** Where elements meet (an angle's heel, a web-to-flange junction). */
+export interface BlockJunction {
+  readonly id: string;
+  readonly attachments: readonly { readonly element: string; readonly u: number }[];
+}
+
+/** A hole of the bolt group, placed on its element. */
 export interface BlockHole {
   readonly id: string;
+  readonly element: string;
   readonly x: number;
-  /** Across the load, 0 ≤ y ≤ width. */
-  readonly y: number;
+  /** Position along the element's centreline, 0 < u < span. */
+  readonly u: number;
   /** Width deducted in net area (nominal plus any allowance of the code). */
   readonly deducted: number;
 }
 
-/** The connected element and its bolt group, as block shear sees it. */
+/** The cross-section and the bolt group at the member's end, as block shear sees it. */
 export interface BlockShearLayout {
-  /** Width of the connected element across the load (y runs over [0, width]). */
-  readonly width: number;
-  readonly thickness: number;
+  readonly elements: readonly BlockElement[];
+  readonly junctions: readonly BlockJunction[];
+  readonly holes: readonly BlockHole[];
   /** Identical pieces torn out together (2 for a double angle); default 1. */
   readonly pieces?: number;
-  readonly holes: readonly BlockHole[];
-  /** Load direction: the block tears out toward the member's loaded end (−x end for `-x`). */
+  /**
+   * Load direction of the member (`-x` means the member's body lies
+   * toward −x and its free end toward +x, beyond the +x-most bolt row). The block tears out toward
+   * the free end; its tension plane crosses each bolt line at the hole nearest the body.
+   */
   readonly direction: LoadDirection;
-  /** x of the loaded end edge the block leaves through; every hole lies beyond it. */
+  /** x of the member's free end, beyond every hole (greater than every x for `-x`). */
   readonly endX: number;
-  /** Which longitudinal edges are free (an angle's heel is not: the other leg is attached there). */
-  readonly freeEdges: { readonly low: boolean; readonly high: boolean };
+  /** Lengths closer than this are equal (default 1e-9 · the largest dimension). */
+  readonly tolerance?: number;
 }
-
-export type BlockOutlineKind = 'two-plane' | 'one-plane-to-low-edge' | 'one-plane-to-high-edge';
 
 /** Gross and net areas of a block's shear and tension planes (all pieces). */
 export interface BlockShearAreas {
@@ -41,13 +64,43 @@ export interface BlockShearAreas {
   readonly Ant: number;
 }
 
+/** A shear plane of an outline: along a bolt line (through its holes) or through an element's root. */
+export interface BlockShearPlane {
+  readonly element: string;
+  /** Position on the element's centreline. */
+  readonly u: number;
+  /** `line`: along a bolt line; `root`: through the thinner side at a junction (no holes). */
+  readonly along: 'line' | 'root';
+  /** The junction, for a root plane. */
+  readonly junction?: string;
+  /** Holes on the plane, for a line. */
+  readonly holes: readonly string[];
+  readonly thickness: number;
+}
+
+/** A stretch of an element the tension plane crosses. */
+export interface BlockTensionSpan {
+  readonly element: string;
+  readonly from: number;
+  readonly to: number;
+}
+
 /** A proposed block outline with its areas. */
 export interface BlockOutline extends BlockShearAreas {
-  readonly kind: BlockOutlineKind;
-  /** y of each shear plane (along an outer bolt line). */
-  readonly shearPlanes: readonly number[];
-  /** Holes the tension plane passes through (the last hole of each gauge line it crosses), in y order. */
+  /**
+   * `two-plane`: tension between two shear planes only; `to-edge`: tension reaches one free edge
+   * (L-shaped); `to-edges`: it reaches two or more; each with `+root` when a plane cuts through an
+   * attached element's root instead of along bolts.
+   */
+  readonly kind: string;
+  /** One line in words: the shear planes and the tension spans. */
+  readonly description: string;
+  readonly shearPlanes: readonly BlockShearPlane[];
+  readonly tension: readonly BlockTensionSpan[];
+  /** Holes the tension plane passes through (each bolt line's hole nearest the body). */
   readonly tensionHoles: readonly string[];
+  /** Free element ends the tension plane reaches. */
+  readonly freeEdges: number;
   /** Σ s²/4g along the tension plane (0 when it runs straight across). */
   readonly staggerSum: number;
   /**
@@ -69,6 +122,8 @@ export interface BlockShearStrength {
   readonly governs: string;
   /** Clause the value comes from. */
   readonly clause: string;
+  /** The tension-term factor used for this outline (AISC Ubs, CSA Ut; EN 1 or 0.5). */
+  readonly tensionFactor: number;
 }
 
 /** An outline with its strength. */
