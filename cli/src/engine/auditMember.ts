@@ -9,7 +9,7 @@ import { makeFinding } from './makeFinding.js';
 import { memberChainTools } from './memberChainTools.js';
 import { profileDetailingFindings } from './profileDetailingFindings.js';
 import { sectionDetailingFindings } from './sectionDetailingFindings.js';
-import { withinTolerance, DEFAULT_TOLERANCE } from './withinTolerance.js';
+import { withinTolerance, DEFAULT_TOLERANCE, type ToleranceSpec } from './withinTolerance.js';
 import type {
   Chain,
   CodeProfile,
@@ -62,26 +62,24 @@ function percent(claimed: number, recomputed: number): string {
 const BLOCK_AREAS = ['Agv', 'Anv', 'Agt', 'Ant'] as const;
 
 /**
- * The outline whose areas the claimed block shear areas describe: of the least outlines kept, the one
- * nearest to every claimed area (largest relative difference least), so a claim for another outline
- * than the governing one is compared with that outline's own areas; the governing one without area
- * claims.
+ * The outline the claimed block shear areas describe: of the least outlines kept, one whose areas all
+ * agree with the claimed ones within tolerance (a claim for another outline than the governing one is
+ * then compared with that outline's own areas, and only its strength with the governing one); else the
+ * governing outline.
  */
-function claimedOutline(result: MemberResult, claims: MemberClaims): MemberBlockOutline | undefined {
+function claimedOutline(
+  result: MemberResult,
+  claims: MemberClaims,
+  tolerance: ToleranceSpec,
+): MemberBlockOutline | undefined {
   const block = result.blockShear;
   if (!block) return undefined;
   const keys = BLOCK_AREAS.filter((k) => claims[k] !== undefined);
-  let best = block.outlines[0];
-  let bestGap = Number.POSITIVE_INFINITY;
-  for (const o of block.outlines) {
-    let gap = 0;
-    for (const k of keys) gap = Math.max(gap, Math.abs(claims[k]! - o[k]) / Math.max(Math.abs(o[k]), 1e-12));
-    if (gap < bestGap) {
-      bestGap = gap;
-      best = o;
-    }
-  }
-  return best;
+  if (keys.length === 0) return block.outlines[0];
+  return (
+    block.outlines.find((o) => keys.every((k) => withinTolerance(claims[k]!, o[k], 'area', tolerance))) ??
+    block.outlines[0]
+  );
 }
 
 function recomputedScalar(
@@ -183,7 +181,7 @@ export function auditMember(
   }
 
   const claims = calcMember.claims ?? {};
-  const outline = claimedOutline(result, claims);
+  const outline = claimedOutline(result, claims, tolerance);
   for (const { key, codes, dimension, label } of SCALARS) {
     const claimed = claims[key];
     if (claimed === undefined) continue;
