@@ -73,3 +73,45 @@ describe('detailingFindings', () => {
     expect(run(m).filter((f) => f.code !== 'LG203')).toEqual([]);
   });
 });
+
+describe('detailingFindings: Table J3.5 increments and the AISC 360-10 sheared-edge column (from memory)', () => {
+  const holeAt = (y: number, extra: Partial<HoleInput>): HoleInput => ({ ...bolt('A', 0, y), ...extra });
+  const lg202 = (h: HoleInput, profile = IN) =>
+    run(plate(10, [h]), profile).filter((f) => f.code === 'LG202');
+
+  it('adds C2 = 1/16 in for an oversized 3/4 in hole: 1 in is below 1-1/16 (Table J3.5, from memory)', () => {
+    const f = lg202(holeAt(1, { type: 'oversized' }));
+    expect(f).toHaveLength(1);
+    expect(f[0]!.recomputed).toBeCloseTo(1.0625, 12);
+    expect(f[0]!.message).toBe(
+      'Hole A is 1.00 in from the y = 0 edge, below the 1.06 in of AISC 360 Table J3.4 (1.00 in) + C2 0.06 in for an oversized hole (Table J3.5)',
+    );
+  });
+
+  it('takes C2 = 0 for a slot parallel to the edge (along the load) and 0.75 d across it, reduced for a shorter slot', () => {
+    expect(lg202(holeAt(1, { type: 'long-slotted', slot: 'along' }))).toEqual([]);
+    // Across: 1 + 0.75 · 0.75 = 1.5625 > 1.5.
+    expect(lg202(holeAt(1.5, { type: 'long-slotted', slot: 'across' }))[0]?.recomputed).toBeCloseTo(
+      1.5625,
+      12,
+    );
+    // An explicit 1-1/2 in slot (maximum 2.5 d = 1.875): C2 = 0.5625 − (1.875 − 1.5)/2 = 0.375 → 1.375 ≤ 1.5.
+    expect(
+      lg202(holeAt(1.5, { type: 'long-slotted', slot: 'across', dimension: { across: 1.5, along: 0.8125 } })),
+    ).toEqual([]);
+    // Short slot across the load: C2 = 1/8 in for 3/4 in bolts.
+    expect(lg202(holeAt(1.1, { type: 'short-slotted', slot: 'across' }))[0]?.recomputed).toBeCloseTo(
+      1.125,
+      12,
+    );
+  });
+
+  it('AISC 360-10: holds the rolled / thermally cut column (1 in for 3/4 in), naming the sheared-edge 1-1/4 in', () => {
+    const IN10: CodeProfile = { ...IN, standard: 'AISC 360-10' };
+    expect(lg202(holeAt(1, {}), IN10)).toEqual([]);
+    const f = lg202(holeAt(0.875, {}), IN10);
+    expect(f[0]!.message).toBe(
+      'Hole A is 0.88 in from the y = 0 edge, below the 1.00 in of AISC 360 Table J3.4, rolled or thermally cut edges; at a sheared edge AISC 360-10 asks 1.25 in (from memory)',
+    );
+  });
+});

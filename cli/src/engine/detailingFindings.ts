@@ -1,14 +1,16 @@
 import { formatQuantity } from './formatQuantity.js';
 import { makeFinding } from './makeFinding.js';
-import { minimumEdgeDistance } from './minimumEdgeDistance.js';
+import { edgeMinimum } from './detailingFindingsEdgeMinimum.js';
 import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js';
 
 /**
  * Detailing findings a checker also looks at (DOMAIN §7):
  * - LG201: centre-to-centre spacing below 2-2/3 d (AISC 360 J3.3), d the larger bolt of the pair;
  * - LG202: edge distance across the load (y to each longitudinal edge) below AISC 360 Table J3.4 /
- *   J3.4M. Edge distance along the load needs the plate ends, which calc files do not carry, so it is
- *   not checked; nor are the Table J3.5 increments for oversized and slotted holes;
+ *   J3.4M plus the Table J3.5 increment C2 for oversized and slotted holes (a slot along the load is
+ *   parallel to the edge: C2 = 0); under AISC 360-10 the rolled / thermally cut edge column, the
+ *   sheared-edge value named in the message ({@link edgeMinimum}). Edge distance along the load needs
+ *   the plate ends, which calc files do not carry, so it is not checked;
  * LG203 (a governing fracture line within a hole's radius of a hole it does not deduct) is made for
  * every member by grazingFindings, called beside this from auditMember.
  * Holes given only by an explicit dimension (no bolt) are skipped for LG201 and LG202.
@@ -62,12 +64,12 @@ export function detailingFindings(
     }
   }
 
-  // AISC 360 Table J3.4 / J3.4M: minimum edge distance, measured across the load.
+  // AISC 360 Table J3.4 / J3.4M (+ C2 of Table J3.5): minimum edge distance, measured across the load.
   holes.forEach((hole, i) => {
-    if (hole.boltDiameter === undefined) return;
-    const minimum = minimumEdgeDistance(hole.boltDiameter, u);
-    if (minimum === undefined) return;
     const edge = Math.min(hole.y, member.width - hole.y);
+    const limit = edgeMinimum(hole, profile, edge);
+    if (limit === undefined) return;
+    const minimum = limit.minimum;
     if (edge < minimum - eps) {
       findings.push(
         makeFinding('LG202', {
@@ -75,7 +77,7 @@ export function detailingFindings(
           holes: [hole.id],
           claimed: edge,
           recomputed: minimum,
-          message: `Hole ${hole.id} is ${formatQuantity(edge, 'length', u)} from the ${hole.y <= member.width - hole.y ? 'y = 0' : 'y = width'} edge, below the ${formatQuantity(minimum, 'length', u)} of AISC 360 Table ${u === 'in' ? 'J3.4' : 'J3.4M'}`,
+          message: `Hole ${hole.id} is ${formatQuantity(edge, 'length', u)} from the ${hole.y <= member.width - hole.y ? 'y = 0' : 'y = width'} edge, below the ${limit.text}`,
           pointer: `${memberPointer}/holes/${i}/y`,
         }),
       );

@@ -183,9 +183,7 @@ export function memberShearLag(
     profile.standard !== 'AISC 360-10' && layout ? connectedGrossArea(member, layout) : undefined;
   try {
     const r = shearLagFactor({
-      ...(connectedArea !== undefined && layout
-        ? { floor: { connectedArea, grossArea: layout.Ag } }
-        : {}),
+      ...(connectedArea !== undefined && layout ? { floor: { connectedArea, grossArea: layout.Ag } } : {}),
       shape: aiscShape(member),
       connected: spec.connected,
       ...(spec.length !== undefined ? { length: spec.length } : {}),
@@ -196,9 +194,7 @@ export function memberShearLag(
     });
     const chosen = r.candidates.find((c) => c.case === r.case)!;
     const cases = r.candidates.filter((c) => c.case !== 'D3 floor');
-    const floor = r.floor
-      ? `; D3 floor${r.case === 'D3 floor' ? ' (governs)' : ''}: ${r.floor.basis}`
-      : '';
+    const floor = r.floor ? `; D3 floor${r.case === 'D3 floor' ? ' (governs)' : ''}: ${r.floor.basis}` : '';
     return {
       U: r.U,
       rule:

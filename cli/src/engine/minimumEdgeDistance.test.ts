@@ -38,4 +38,11 @@ describe('minimumEdgeDistance (AISC 360-16 Table J3.4 / J3.4M, published)', () =
     expect(minimumEdgeDistance(0.8, 'in')).toBeUndefined();
     expect(minimumEdgeDistance(12, 'mm')).toBeUndefined();
   });
+
+  it('AISC 360-10 sheared edges (from memory): 3/4 → 1-1/4, 1 → 1-3/4, M20 → 34 mm, 1.75 d over the table', () => {
+    expect(minimumEdgeDistance(0.75, 'in', 'sheared-2010')).toBe(1.25);
+    expect(minimumEdgeDistance(1, 'in', 'sheared-2010')).toBe(1.75);
+    expect(minimumEdgeDistance(20, 'mm', 'sheared-2010')).toBe(34);
+    expect(minimumEdgeDistance(1.5, 'in', 'sheared-2010')).toBeCloseTo(2.625, 12);
+  });
 });

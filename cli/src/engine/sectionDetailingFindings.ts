@@ -1,12 +1,13 @@
 import { elementHoleGroups } from './elementHoleGroups.js';
 import { formatQuantity } from './formatQuantity.js';
 import { makeFinding } from './makeFinding.js';
-import { minimumEdgeDistance } from './minimumEdgeDistance.js';
+import { edgeMinimum } from './detailingFindingsEdgeMinimum.js';
 import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js';
 
 /**
  * AISC 360 detailing of a section member, measured within each element (DOMAIN §7): LG201 spacing
  * below 2-2/3 d (J3.3) between holes of one element, LG202 edge distance below Table J3.4 / J3.4M
+ * (+ C2 of Table J3.5 for oversized and slotted holes; AISC 360-10's sheared-edge value in the message)
  * measured to the element's free edges only (an angle's toe, a flange's tips; an angle's heel and a
  * web are joined to other elements and have no edge). On a section the edge of a strip is the
  * element's centreline end, so the toe distance is `a − gauge` exactly. LG203 is measured on the
@@ -56,11 +57,13 @@ export function sectionDetailingFindings(
     }
     for (const h of holes) {
       if (h.boltDiameter === undefined) continue;
-      const minimum = minimumEdgeDistance(h.boltDiameter, u);
-      if (minimum === undefined) continue;
       const edges = [...(group.free.low ? [h.y] : []), ...(group.free.high ? [group.width - h.y] : [])];
       if (edges.length === 0) continue;
       const edge = Math.min(...edges);
+      // Table J3.4 + C2 of Table J3.5 for oversized and slotted holes.
+      const limit = edgeMinimum(member.holes[h.index]!, profile, edge);
+      if (limit === undefined) continue;
+      const minimum = limit.minimum;
       if (edge < minimum - eps) {
         findings.push(
           makeFinding('LG202', {
@@ -68,7 +71,7 @@ export function sectionDetailingFindings(
             holes: [h.id],
             claimed: edge,
             recomputed: minimum,
-            message: `Hole ${h.id} is ${formatQuantity(edge, 'length', u)} from the free edge of ${group.element}, below the ${formatQuantity(minimum, 'length', u)} of AISC 360 Table ${u === 'in' ? 'J3.4' : 'J3.4M'}`,
+            message: `Hole ${h.id} is ${formatQuantity(edge, 'length', u)} from the free edge of ${group.element}, below the ${limit.text}`,
             pointer: `${memberPointer}/holes/${h.index}/gauge`,
           }),
         );

@@ -135,7 +135,17 @@ describe('EN 1993-1-1 profile', () => {
       ['p', 'maximum', 140],
     ]);
     expect(
-      en1993Detailing({ d0, t: 20, e1: 26.4, e2: 26.4, p1: 48.4, p2: 52.8, eMax: 120, pMax: 200, exposed: true }),
+      en1993Detailing({
+        d0,
+        t: 20,
+        e1: 26.4,
+        e2: 26.4,
+        p1: 48.4,
+        p2: 52.8,
+        eMax: 120,
+        pMax: 200,
+        exposed: true,
+      }),
     ).toEqual([]);
     expect(en1993Detailing({ d0, t: 20, pMax: 201, exposed: true })[0]?.limit).toBe(200);
   });
@@ -150,9 +160,7 @@ describe('EN 1993-1-1 profile', () => {
     // M20, d0 22: staggered lines 30 mm apart (≥ 26.4) with centres 60 mm apart (≥ 52.8) pass; before,
     // p2 30 < 2.4 d0 = 52.8 was warned.
     expect(en1993Detailing({ d0: 22, p2Staggered: 30, L: 60 })).toEqual([]);
-    expect(
-      en1993Detailing({ d0: 22, p2Staggered: 25, L: 50 }).map((i) => [i.quantity, i.limit]),
-    ).toEqual([
+    expect(en1993Detailing({ d0: 22, p2Staggered: 25, L: 50 }).map((i) => [i.quantity, i.limit])).toEqual([
       ['p2', expect.closeTo(26.4, 9)],
       ['L', expect.closeTo(52.8, 9)],
     ]);
