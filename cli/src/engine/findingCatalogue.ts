@@ -206,7 +206,7 @@ export const FINDING_CATALOGUE: readonly FindingRule[] = [
     class: 'detailing',
     severity: 'warning',
     title: 'Edge distance across the load is below the minimum',
-    help: 'A hole centre is closer to a longitudinal plate edge than AISC 360 Table J3.4 (J3.4M) allows for its bolt size. Edge distance along the load is not checked: calc files do not carry the plate ends.',
+    help: 'A hole centre is closer to a longitudinal plate edge than AISC 360 Table J3.4 (J3.4M) allows for its bolt size, plus the Table J3.5 increment C2 for oversized and slotted holes. Under AISC 360-10 the rolled or thermally cut edge column is used; the message names the sheared-edge value. Edge distance along the load is not checked: calc files do not carry the plate ends.',
   },
   {
     code: 'LG203',
@@ -222,7 +222,7 @@ export const FINDING_CATALOGUE: readonly FindingRule[] = [
     class: 'detailing',
     severity: 'warning',
     title: 'Spacing or edge distance is below the EN 1993-1-8 minimum',
-    help: 'An end or edge distance or a spacing is below EN 1993-1-8 Table 3.3 (e1, e2 ≥ 1.2 d0; p1 ≥ 2.2 d0; p2 ≥ 2.4 d0). Bearing and tear-out resistances of the bolts fall off, and the table’s rules for the connection no longer hold.',
+    help: 'An end or edge distance or a spacing is below EN 1993-1-8 Table 3.3 (e1, e2 ≥ 1.2 d0; p1 ≥ 2.2 d0; p2 ≥ 2.4 d0, or for staggered rows p2 ≥ 1.2 d0 with every two fasteners at least 2.4 d0 apart). Bearing and tear-out resistances of the bolts fall off, and the table’s rules for the connection no longer hold.',
   },
   {
     code: 'LG205',
@@ -230,7 +230,7 @@ export const FINDING_CATALOGUE: readonly FindingRule[] = [
     class: 'detailing',
     severity: 'warning',
     title: 'Spacing or edge distance is above the EN 1993-1-8 maximum',
-    help: 'An end or edge distance exceeds 4t + 40 mm, or a spacing exceeds min(14t, 200 mm) (EN 1993-1-8 Table 3.3). Plies may separate, corrode between bolts or buckle locally.',
+    help: 'An end or edge distance exceeds 4t + 40 mm, or a spacing exceeds min(14t, 200 mm) (EN 1993-1-8 Table 3.3). Plies may separate, corrode between bolts or buckle locally. For tension members the table applies the maxima only when the member is exposed to the weather or other corrosive influences (note 1), so it is raised only for members known to be exposed.',
   },
   {
     code: 'LG206',
