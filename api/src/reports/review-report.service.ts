@@ -57,7 +57,7 @@ export class ReviewReportService {
           .join('<br>');
         return `<tr><td>${esc(names.get(r.calcFileId))}</td><td>${esc(r.memberId)}</td><td>${esc(`${r.profile.standard} ${r.profile.method}`)}</td>
 <td class="n">${num(r.Ag)}</td><td class="n">${num(r.An)}</td><td class="n">${num(r.U, 2)}</td><td class="n">${num(r.Ae)}</td>
-<td>${chains}</td><td class="n">${num(r.yielding, 1)}</td><td class="n">${num(r.rupture, 1)}</td><td class="n"><b>${num(r.available, 1)}</b></td></tr>`;
+<td>${chains}</td><td class="n">${num(r.yielding, 1)}</td><td class="n">${num(r.rupture, 1)}</td><td class="n"><b>${num(r.available, 1)}</b>${(r.result as { governing?: { limitState?: string } } | null)?.governing?.limitState === 'block shear' ? '<br><small>block shear</small>' : ''}</td></tr>`;
       })
       .join('\n');
     const findingRows = findings

@@ -34,10 +34,14 @@ export interface Recomputed {
   readonly yielding: number;
   readonly rupture: number;
   readonly available: number;
+  /** Available block shear strength, when the calc gives block-shear input. */
+  readonly blockShear?: number;
+  /** Limit state of the governing strength: yielding, rupture or block shear. */
+  readonly governs?: string;
   readonly controllingChain: readonly string[] | null;
 }
 
-type NumericKey = 'Ag' | 'An' | 'U' | 'Ae' | 'yielding' | 'rupture' | 'available';
+type NumericKey = 'Ag' | 'An' | 'U' | 'Ae' | 'yielding' | 'rupture' | 'blockShear' | 'available';
 
 const rows: readonly { key: NumericKey; label: string; kind: keyof UnitLabels | 'ratio' }[] = [
   { key: 'Ag', label: 'Gross area Ag', kind: 'area' },
@@ -46,6 +50,7 @@ const rows: readonly { key: NumericKey; label: string; kind: keyof UnitLabels | 
   { key: 'Ae', label: 'Effective area Ae', kind: 'area' },
   { key: 'yielding', label: 'Tensile yielding (available)', kind: 'force' },
   { key: 'rupture', label: 'Tensile rupture (available)', kind: 'force' },
+  { key: 'blockShear', label: 'Block shear (available)', kind: 'force' },
   { key: 'available', label: 'Governing available strength', kind: 'force' },
 ];
 
@@ -118,11 +123,13 @@ export function ClaimsComparison({ claims, recomputed, units, tolerance = 0.005 
           {rows.map(({ key, label, kind }) => {
             const claimed = claims?.[key];
             const value = recomputed[key];
+            if (value === undefined) return null;
             const v = verdict(claimed, value, tolerance);
             return (
               <TableRow key={key} className={v === 'over' ? styles.diffRow : undefined}>
                 <TableCell>
                   {label}
+                  {key === 'available' && recomputed.governs ? `, ${recomputed.governs}` : ''}
                   {unitOf(kind)}
                 </TableCell>
                 <TableCell className={styles.num}>{formatQuantity(claimed, units, kind)}</TableCell>

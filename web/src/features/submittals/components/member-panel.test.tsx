@@ -1,4 +1,5 @@
 import { fireEvent, screen, within } from '@testing-library/react';
+import { readFileSync } from 'node:fs';
 import { loadCalcText } from 'ligament/calc';
 import { analyseMember } from 'ligament/engine';
 import { describe, expect, it } from 'vitest';
@@ -47,5 +48,21 @@ describe('MemberPanel', () => {
     expect(netRow).toHaveTextContent(/overstated by \d+\.\d %/);
     expect(within(table).getByRole('row', { name: /Gross area Ag/ })).toHaveTextContent('agrees');
     expect(within(table).getByRole('row', { name: /Controlling chain/ })).toHaveTextContent('differs');
+  });
+
+  it('compares the block shear claim and names block shear as the governing limit state', () => {
+    // The Harbour Lantern brace (fictional, schema/examples): block shear 81.1 kip governs, claimed so.
+    const brace = readFileSync(`${process.cwd()}/../schema/examples/lantern-brace-angle.json`, 'utf8');
+    const loaded = loadCalcText(brace, 'lantern-brace-angle.json');
+    if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('; '));
+    const member = loaded.document.members[0]!;
+    const result = analyseMember(member.input, loaded.document.profile, { k: 5 });
+    renderWithProviders(
+      <MemberPanel document={loaded.document} member={member} result={result} findings={[]} />,
+    );
+    const block = screen.getByRole('row', { name: /^Block shear \(available\)/ });
+    expect(within(block).getByText(/agrees/)).toBeTruthy();
+    const governing = screen.getByRole('row', { name: /^Governing available strength, block shear/ });
+    expect(within(governing).getByText(/agrees/)).toBeTruthy();
   });
 });

@@ -107,6 +107,8 @@ export function MemberPanel({ document, member, result, findings }: MemberPanelP
               yielding: result.yielding.available,
               rupture: result.rupture.available,
               available: result.governing.available,
+              ...(result.blockShear ? { blockShear: result.blockShear.available } : {}),
+              governs: result.governing.limitState,
               controllingChain: governingChain,
             }}
           />
