@@ -3,10 +3,8 @@ import { ConfigModule, type ConfigType } from '@nestjs/config';
 import { APP_GUARD } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { ThrottlerGuard, ThrottlerModule } from '@nestjs/throttler';
-import type { ExecutionContext } from '@nestjs/common';
 import { existsSync } from 'node:fs';
 import { AuthModule } from './auth/auth.module.js';
-import { LOGIN_THROTTLE } from './auth/decorators/login-throttle.decorator.js';
 import { AuthenticationGuard } from './auth/guards/authentication.guard.js';
 import { ProjectAccessGuard } from './auth/guards/project-access.guard.js';
 import { RolesGuard } from './auth/guards/roles.guard.js';
@@ -26,9 +24,6 @@ import { SubmittalsModule } from './submittals/submittals.module.js';
 import { TokensModule } from './tokens/tokens.module.js';
 import { UsersModule } from './users/users.module.js';
 
-const isLoginRoute = (context: ExecutionContext) =>
-  Reflect.getMetadata(LOGIN_THROTTLE, context.getHandler()) === true;
-
 @Module({
   imports: [
     ConfigModule.forRoot({
@@ -41,15 +36,8 @@ const isLoginRoute = (context: ExecutionContext) =>
     ThrottlerModule.forRootAsync({
       inject: [throttleConfig.KEY],
       useFactory: (t: ConfigType<typeof throttleConfig>) => ({
-        throttlers: [
-          { name: 'default', ttl: t.ttlMs, limit: t.limit },
-          {
-            name: 'login',
-            ttl: t.loginTtlMs,
-            limit: t.loginLimit,
-            skipIf: (context) => !isLoginRoute(context),
-          },
-        ],
+        // Sign-in has its own limits on failures per account and address (LoginAttemptsService).
+        throttlers: [{ name: 'default', ttl: t.ttlMs, limit: t.limit }],
         errorMessage: 'Too many requests; wait a moment and try again.',
       }),
     }),

@@ -37,6 +37,7 @@ export async function bootApp(env: Record<string, string> = {}): Promise<TestApp
     MAIL_RETRY_INTERVAL_MS: '0',
     JWT_SECRET: 'test-secret-0123456789abcdef',
     LOGIN_THROTTLE_LIMIT: '1000',
+    LOGIN_ACCOUNT_THROTTLE_LIMIT: '1000',
     THROTTLE_LIMIT: '100000',
     ...env,
   });

@@ -1,9 +1,16 @@
-import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
-import { ApiBearerAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Get, HttpCode, Post, Req } from '@nestjs/common';
+import {
+  ApiBearerAuth,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+  ApiTooManyRequestsResponse,
+} from '@nestjs/swagger';
+import type { Request } from 'express';
+import { ErrorBody } from '../common/error-body.js';
 import type { AuthUser } from './auth-user.js';
 import { AuthService } from './auth.service.js';
 import { CurrentUser } from './decorators/current-user.decorator.js';
-import { LoginThrottle } from './decorators/login-throttle.decorator.js';
 import { Public } from './decorators/public.decorator.js';
 import { TokenAccess } from './decorators/token-access.decorator.js';
 import { LoginDto, LoginResponseDto, MeDto } from './dto/login.dto.js';
@@ -15,12 +22,18 @@ export class AuthController {
 
   @Post('login')
   @Public()
-  @LoginThrottle()
   @HttpCode(200)
-  @ApiOperation({ summary: 'Sign in with e-mail and password (throttled per client address)' })
+  @ApiOperation({
+    summary: 'Sign in with e-mail and password (failed attempts limited per account and per client address)',
+  })
   @ApiOkResponse({ type: LoginResponseDto })
-  login(@Body() dto: LoginDto): Promise<LoginResponseDto> {
-    return this.auth.login(dto);
+  @ApiTooManyRequestsResponse({
+    type: ErrorBody,
+    description:
+      'Too many failed sign-ins for the account or from the address; `Retry-After` gives the seconds',
+  })
+  login(@Body() dto: LoginDto, @Req() request: Request): Promise<LoginResponseDto> {
+    return this.auth.login(dto, request.ip ?? request.socket.remoteAddress ?? 'unknown');
   }
 
   @Get('me')

@@ -18,6 +18,7 @@ import { AuthenticationGuard } from './guards/authentication.guard.js';
 import { ProjectAccessGuard } from './guards/project-access.guard.js';
 import { RolesGuard } from './guards/roles.guard.js';
 import { JwtStrategy } from './jwt.strategy.js';
+import { LoginAttemptsService } from './login-attempts.service.js';
 import { ProjectAccessService } from './project-access.service.js';
 
 /**
@@ -41,6 +42,7 @@ import { ProjectAccessService } from './project-access.service.js';
   controllers: [AuthController],
   providers: [
     AuthService,
+    LoginAttemptsService,
     JwtStrategy,
     ProjectAccessService,
     AuthenticationGuard,

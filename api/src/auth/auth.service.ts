@@ -1,32 +1,60 @@
 import { Inject, Injectable, UnauthorizedException } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { JwtService } from '@nestjs/jwt';
+import { randomBytes } from 'node:crypto';
+import { TooManyRequestsException } from '../common/too-many-requests.exception.js';
 import { authConfig } from '../config/index.js';
 import { UsersService } from '../users/users.service.js';
 import type { AuthUser, JwtPayload } from './auth-user.js';
 import type { LoginDto, LoginResponseDto, MeDto } from './dto/login.dto.js';
-import { verifyPassword } from './password.js';
+import { LoginAttemptsService } from './login-attempts.service.js';
+import { hashPassword, verifyPassword } from './password.js';
 
 @Injectable()
 export class AuthService {
+  /** A hash no typed password matches, made once at start-up with the same scrypt parameters. */
+  private readonly dummyHash: Promise<string> = hashPassword(randomBytes(32).toString('base64'));
+
   constructor(
     private readonly users: UsersService,
     private readonly jwt: JwtService,
+    private readonly attempts: LoginAttemptsService,
     @Inject(authConfig.KEY) private readonly config: ConfigType<typeof authConfig>,
   ) {}
 
-  async login(dto: LoginDto): Promise<LoginResponseDto> {
+  /**
+   * One answer, after the same work, for an unknown e-mail, an inactive account, an account that has
+   * not set a password and a wrong password: no account probing by answer or by time. Only failures
+   * count toward the per-account and per-address limits.
+   */
+  async login(dto: LoginDto, address: string): Promise<LoginResponseDto> {
+    const wait = this.attempts.retryAfterSeconds(dto.email, address);
+    if (wait > 0) {
+      throw new TooManyRequestsException(
+        `Too many failed sign-ins for this account or from this address; try again in ${wait} s.`,
+        wait,
+      );
+    }
     const user = await this.users.findByEmail(dto.email);
-    // One answer for unknown e-mail, wrong password and inactive account: no account probing.
-    const ok =
-      user?.passwordHash && user.active ? await verifyPassword(dto.password, user.passwordHash) : false;
-    if (!user || !ok) throw new UnauthorizedException('E-mail or password is wrong.');
+    const hash = user?.active ? user.passwordHash : null;
+    const ok = hash ? await verifyPassword(dto.password, hash) : await this.verifyDummy(dto.password);
+    if (!user || !ok) {
+      this.attempts.recordFailure(dto.email, address);
+      throw new UnauthorizedException('E-mail or password is wrong.');
+    }
+    this.attempts.recordSuccess(dto.email);
     const payload: JwtPayload = { sub: user.id, role: user.role };
     return {
       accessToken: await this.jwt.signAsync(payload),
       expiresIn: this.config.jwtExpiresIn,
       user: await this.users.get(user.id),
     };
+  }
+
+  /** The scrypt work of a real check, for accounts that cannot sign in; always false. */
+  async verifyDummy(password: string): Promise<false> {
+    await verifyPassword(password, await this.dummyHash);
+    return false;
   }
 
   async me(caller: AuthUser): Promise<MeDto> {

@@ -2,6 +2,7 @@ import { ArgumentsHost, Catch, ExceptionFilter, HttpException, Logger } from '@n
 import type { Response } from 'express';
 import { STATUS_CODES } from 'node:http';
 import type { ErrorBody } from './error-body.js';
+import { TooManyRequestsException } from './too-many-requests.exception.js';
 
 /**
  * Turns every exception into `{ statusCode, error, message, details? }`. Unknown errors become a 500
@@ -19,6 +20,8 @@ export class HttpErrorFilter implements ExceptionFilter {
         exception instanceof Error ? (exception.stack ?? exception.message) : String(exception),
       );
     if (response.headersSent) return;
+    if (exception instanceof TooManyRequestsException)
+      response.setHeader('Retry-After', String(exception.retryAfterSeconds));
     response.status(body.statusCode).json(body);
   }
 

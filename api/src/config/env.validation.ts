@@ -32,6 +32,7 @@ export class EnvironmentVariables {
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) THROTTLE_LIMIT?: number;
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) LOGIN_THROTTLE_TTL_MS?: number;
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) LOGIN_THROTTLE_LIMIT?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) LOGIN_ACCOUNT_THROTTLE_LIMIT?: number;
   @IsOptional() @IsString() SMTP_HOST?: string;
   @IsOptional() @Type(() => Number) @IsInt() @Min(0) @Max(65535) SMTP_PORT?: number;
   @IsOptional() @IsString() MAIL_FROM?: string;

@@ -1,8 +1,16 @@
-import { ConflictException, GoneException, Inject, Injectable, NotFoundException } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  GoneException,
+  Inject,
+  Injectable,
+  NotFoundException,
+} from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { hashPassword } from '../auth/password.js';
+import { passwordProblem } from '../auth/password-rules.js';
 import type { AuthUser } from '../auth/auth-user.js';
 import { randomSecret, sha256Hex } from '../common/hash.js';
 import { appConfig, authConfig } from '../config/index.js';
@@ -113,6 +121,16 @@ export class InvitationsService {
 
   async accept(token: string, dto: AcceptInvitationDto): Promise<{ id: number; email: string }> {
     const invitation = await this.usable(token);
+    const name = dto.name ?? invitation.name;
+    const [local = ''] = invitation.email.split('@');
+    const context = [invitation.email, local, ...local.split(/[._+-]/), name, ...name.split(/\s+/)];
+    const problem = passwordProblem(dto.password, context);
+    if (problem) {
+      throw new BadRequestException({
+        message: `The password ${problem}.`,
+        details: [{ property: 'password', constraints: { passwordRules: `password ${problem}` } }],
+      });
+    }
     const passwordHash = await hashPassword(dto.password);
     return this.sequelize.transaction(async (transaction) => {
       if (await this.users.count({ where: { email: invitation.email }, transaction })) {
@@ -121,7 +139,7 @@ export class InvitationsService {
       const user = await this.users.create(
         {
           email: invitation.email,
-          name: dto.name ?? invitation.name,
+          name,
           role: invitation.role,
           organisationId: invitation.organisationId,
           passwordHash,
