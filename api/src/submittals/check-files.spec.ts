@@ -67,4 +67,23 @@ describe('checkFiles', () => {
       ['d.json', 'encoding'],
     ]);
   });
+
+  it('refuses a member whose least chain leaves a net width ≤ 0 (rule net-area-positive), never a negative strength', () => {
+    // 2-1/2 in plate, four 3/4 in bolts on gauge lines 1/2 in apart, staggered 0.7 in (no holes overlap):
+    // wn = 2.5 − 4 · 0.875 + 3 · 0.7²/(4 · 0.5) = −0.265 in (AISC 360 B4.3b and s²/4g, common practice).
+    const doc = JSON.parse(plate('P-Z').toString()) as { members: Record<string, unknown>[] };
+    doc.members[0]!['width'] = '2-1/2';
+    doc.members[0]!['holes'] = [0.5, 1, 1.5, 2].map((y, i) => ({
+      id: 'ABCD'[i],
+      x: i % 2 === 0 ? 0 : 0.7,
+      y,
+      bolt: '3/4',
+    }));
+    const out = checkFiles([{ name: 'z.json', content: Buffer.from(JSON.stringify(doc, null, 2)) }], rules);
+    expect(out.ok).toBe(false);
+    if (out.ok) return;
+    expect(out.errors.map((e) => [e.file, e.pointer, e.rule])).toEqual([
+      ['z.json', '/members/0/holes', 'net-area-positive'],
+    ]);
+  });
 });
