@@ -13,7 +13,7 @@ export interface paths {
     };
     get?: never;
     put?: never;
-    /** Sign in with e-mail and password (throttled per client address) */
+    /** Sign in with e-mail and password (failed attempts limited per account and per client address) */
     post: operations['AuthController_login'];
     delete?: never;
     options?: never;
@@ -131,7 +131,7 @@ export interface paths {
       path?: never;
       cookie?: never;
     };
-    /** Demo mode only: every message the local SMTP fake received, newest first (404 otherwise) */
+    /** Admin, demo mode only: every message the local SMTP fake received, newest first (404 otherwise). Invitation links are in these mails, so only an admin may read them. */
     get: operations['MailController_listMailbox'];
     put?: never;
     post?: never;
@@ -695,6 +695,18 @@ export interface components {
       expiresIn: string;
       user: components['schemas']['UserDto'];
     };
+    ErrorBody: {
+      /** @example 422 */
+      statusCode: number;
+      /** @example Unprocessable Entity */
+      error: string;
+      /** @example 2 of 10 files are invalid; nothing was stored. */
+      message: string;
+      /** @description Itemised problems: CalcError[] for 422 uploads, {property, constraints} for 400 validation. */
+      details?: {
+        [key: string]: unknown;
+      }[];
+    };
     MeDto: {
       id: number;
       email: string;
@@ -1000,18 +1012,6 @@ export interface components {
       webPath: string;
       /** @example http://localhost:3000/submittals/12 */
       webUrl: string;
-    };
-    ErrorBody: {
-      /** @example 422 */
-      statusCode: number;
-      /** @example Unprocessable Entity */
-      error: string;
-      /** @example 2 of 10 files are invalid; nothing was stored. */
-      message: string;
-      /** @description Itemised problems: CalcError[] for 422 uploads, {property, constraints} for 400 validation. */
-      details?: {
-        [key: string]: unknown;
-      }[];
     };
     FileDiffDto: {
       /** @enum {string} */
@@ -1348,6 +1348,10 @@ export interface components {
       engineVersion: string;
       database: components['schemas']['DatabaseHealthDto'];
       mail: components['schemas']['MailHealthDto'];
+      /** @description Demo mode: seeded data, demo mailbox (admin), demo sign-ins */
+      demo: boolean;
+      /** @description Unsafe settings, e.g. the public demo JWT secret */
+      warnings: string[];
     };
   };
   responses: never;
@@ -1377,6 +1381,15 @@ export interface operations {
         };
         content: {
           'application/json': components['schemas']['LoginResponseDto'];
+        };
+      };
+      /** @description Too many failed sign-ins for the account or from the address; `Retry-After` gives the seconds */
+      429: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
         };
       };
     };

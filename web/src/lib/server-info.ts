@@ -4,19 +4,19 @@ import { api } from './api-client';
 export interface ServerInfo {
   readonly engineVersion: string;
   readonly status: string;
-  /** The demo mailbox answers only in demo mode (404 otherwise). */
+  /** Demo mode, as /api/health reports it (the demo mailbox itself needs an admin sign-in). */
   readonly demo: boolean;
+  /** Unsafe settings the server reports, e.g. the public demo JWT secret. */
+  readonly warnings: readonly string[];
 }
 
 export async function getServerInfo(): Promise<ServerInfo> {
-  const [health, mailbox] = await Promise.all([
-    api.GET('/api/health'),
-    api.GET('/api/mail/mailbox').catch(() => null),
-  ]);
+  const health = await api.GET('/api/health');
   return {
     engineVersion: health.data?.engineVersion ?? 'unknown',
     status: health.data?.status ?? 'down',
-    demo: mailbox?.response.ok === true,
+    demo: health.data?.demo === true,
+    warnings: health.data?.warnings ?? [],
   };
 }
 

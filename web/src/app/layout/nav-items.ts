@@ -26,7 +26,8 @@ export const navItems: readonly NavItem[] = [
   {
     label: 'Demo mailbox',
     href: paths.mailbox.getHref(),
-    roles: ['admin', 'checker', 'consultant', 'owner-rep'],
+    // Invitation links arrive there: admin only.
+    roles: ['admin'],
     demoOnly: true,
   },
 ];
