@@ -184,6 +184,32 @@ describe('upload atomicity', () => {
   });
 });
 
+describe('block shear in the governing strength', () => {
+  it('stores block shear as the governing available strength and the report names it', async () => {
+    // By hand (AISC 360 J4.3, common practice): 12 × 1/2 plate, holes at y = 3 and 9, end distance
+    // 1.5 in: Agv 1.5, Anv 1.0625, Ant 2.5625 in²; φRn = 0.75 (min(36.98, 32.4) + 148.63) = 135.77 kip,
+    // below yielding 194.4 and rupture 222.9 kip. A claim of it is no finding.
+    const file = calcFile('SP-BS', {
+      blockShear: { endDistance: 1.5 },
+      claims: { An: 5.125, blockShear: 135.77, available: 135.77 },
+    });
+    const res = await upload(consultant, [['bs.json', file]], 'Block shear governs');
+    expect(res.status).toBe(201);
+    expect(res.body.summary.findings).toBe(0);
+    const id = res.body.submittalId as number;
+    const results = await request(t.http).get(`/api/submittals/${id}/results`).set(bearer(checker));
+    expect(results.status).toBe(200);
+    const member = (
+      results.body as { memberId: string; available: number; result: { governing: { limitState: string } } }[]
+    ).find((r) => r.memberId === 'SP-BS')!;
+    expect(member.available).toBeCloseTo(0.75 * (32.4 + 58 * 2.5625), 6);
+    expect(member.result.governing.limitState).toBe('block shear');
+    const report = await request(t.http).get(`/api/submittals/${id}/report`).set(bearer(checker));
+    expect(report.status).toBe(200);
+    expect(report.text).toContain('<small>block shear</small>');
+  });
+});
+
 describe('upload limits', () => {
   it('answers 413 for a file over the per-file limit', async () => {
     const res = await upload(consultant, [['big.json', padded('SP-BIG', 25_000)]]);
