@@ -2,19 +2,21 @@ import { describe, expect, it } from 'vitest';
 import { ciSnippet } from './ci-snippet';
 
 describe('ciSnippet', () => {
-  it('gives the exact check and submit commands for the project, with the new token', () => {
-    const text = ciSnippet({ serverUrl: 'https://ligament.example.test', projectId: 7, token: 'lgt_abc' });
+  const text = ciSnippet({ serverUrl: 'https://ligament.example.test', projectId: 7 });
+
+  it('gives the check and submit commands for the project with the glob quoted for the CLI to expand', () => {
     expect(text).toContain(
-      'npx ligament check --format sarif --fail-on overstated calc/**/*.json > ligament.sarif',
+      "npx ligament check --format sarif --fail-on overstated 'calc/**/*.json' > ligament.sarif",
     );
     expect(text).toContain(
-      'npx ligament submit --server https://ligament.example.test --token lgt_abc --project 7 calc/**/*.json',
+      `npx ligament submit --server https://ligament.example.test --token "$LIGAMENT_TOKEN" --project 7 'calc/**/*.json'`,
     );
   });
 
-  it('refers to a CI secret when the token is not on screen', () => {
-    expect(ciSnippet({ serverUrl: 'https://ligament.example.test', projectId: 7 })).toContain(
-      '--token "$LIGAMENT_TOKEN"',
-    );
+  it('reads the token from the CI secret variable and never holds a secret', () => {
+    expect(text).toContain('"$LIGAMENT_TOKEN"');
+    expect(text).not.toMatch(/lgt_/);
+    // Every glob is quoted: no bare calc/** left for the shell.
+    expect(text.match(/calc\/\*\*\/\*\.json/g)?.length).toBe(text.match(/'calc\/\*\*\/\*\.json'/g)?.length);
   });
 });

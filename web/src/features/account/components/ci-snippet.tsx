@@ -21,18 +21,22 @@ const useStyles = makeStyles({
 export interface CiSnippetProps {
   readonly serverUrl: string;
   readonly projectId: number;
-  /** The secret when it has just been created; otherwise a placeholder variable name. */
-  readonly token?: string;
 }
 
-/** The CI step to paste: check the calc files, then submit them to this project. */
-export function ciSnippet({ serverUrl, projectId, token }: CiSnippetProps): string {
+/** The CI variable the snippet reads the token from; the secret itself never goes into the snippet. */
+export const TOKEN_VARIABLE = 'LIGAMENT_TOKEN';
+
+/**
+ * The CI step to paste: check the calc files, then submit them to this project. The glob is quoted
+ * so the CLI expands it (the same on every shell, `**` included) and the token comes from a CI secret.
+ */
+export function ciSnippet({ serverUrl, projectId }: CiSnippetProps): string {
   return [
     '# Check every calc file; fail the build on an overstated claim, write SARIF for code review.',
-    'npx ligament check --format sarif --fail-on overstated calc/**/*.json > ligament.sarif',
+    "npx ligament check --format sarif --fail-on overstated 'calc/**/*.json' > ligament.sarif",
     '',
     '# Send the files to the checker as a new submittal.',
-    `npx ligament submit --server ${serverUrl} --token ${token ?? '"$LIGAMENT_TOKEN"'} --project ${projectId} calc/**/*.json`,
+    `npx ligament submit --server ${serverUrl} --token "$${TOKEN_VARIABLE}" --project ${projectId} 'calc/**/*.json'`,
   ].join('\n');
 }
 
@@ -53,11 +57,11 @@ export function CiSnippet(props: CiSnippetProps) {
           void navigator.clipboard?.writeText(text).then(() => setCopied(true));
         }}
       >
-        {copied ? 'Copied' : 'Copy'}
+        {copied ? 'Copied' : 'Copy snippet'}
       </Button>
-      {!props.token && (
-        <Text size={200}>Store the token as a CI secret named LIGAMENT_TOKEN; never commit it.</Text>
-      )}
+      <Text size={200}>
+        Store the token as a masked CI secret variable named {TOKEN_VARIABLE}; never commit it.
+      </Text>
     </div>
   );
 }

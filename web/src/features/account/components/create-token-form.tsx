@@ -11,10 +11,11 @@ import {
   Text,
   tokens,
 } from '@fluentui/react-components';
+import { CopyRegular } from '@fluentui/react-icons';
 import { useState } from 'react';
 import type { Schema } from '@/lib/api-schemas';
 import { createTokenInputSchema, useCreateToken } from '../api/create-token';
-import { CiSnippet } from './ci-snippet';
+import { CiSnippet, TOKEN_VARIABLE } from './ci-snippet';
 
 const useStyles = makeStyles({
   form: {
@@ -29,6 +30,12 @@ const useStyles = makeStyles({
     fontSize: tokens.fontSizeBase300,
     wordBreak: 'break-all',
     userSelect: 'all',
+  },
+  secretRow: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    gap: tokens.spacingHorizontalM,
   },
   shown: {
     display: 'flex',
@@ -50,6 +57,7 @@ export function CreateTokenForm({ projects, serverUrl }: CreateTokenFormProps) {
   const [projectId, setProjectId] = useState<number | undefined>(projects[0]?.id);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const create = useCreateToken();
+  const [copiedToken, setCopiedToken] = useState<string | null>(null);
 
   const submit = () => {
     const parsed = createTokenInputSchema.safeParse({ name, projectId });
@@ -98,11 +106,25 @@ export function CreateTokenForm({ projects, serverUrl }: CreateTokenFormProps) {
               Ligament keeps only its fingerprint. If you lose it, revoke it and make another.
             </MessageBarBody>
           </MessageBar>
-          <Text className={styles.secret} aria-label="New token">
-            {create.data.token}
+          <div className={styles.secretRow}>
+            <Text className={styles.secret} aria-label="New token">
+              {create.data.token}
+            </Text>
+            <Button
+              icon={<CopyRegular />}
+              onClick={() => {
+                const secret = create.data.token;
+                void navigator.clipboard?.writeText(secret).then(() => setCopiedToken(secret));
+              }}
+            >
+              {copiedToken === create.data.token ? 'Token copied' : 'Copy token'}
+            </Button>
+          </div>
+          <Text>
+            Save it in your CI settings as a masked secret variable named <code>{TOKEN_VARIABLE}</code>, then
+            add this step to the CI job (it reads the variable; the token is not in it):
           </Text>
-          <Text weight="semibold">Paste this into the CI job:</Text>
-          <CiSnippet serverUrl={serverUrl} projectId={create.data.projectId} token={create.data.token} />
+          <CiSnippet serverUrl={serverUrl} projectId={create.data.projectId} />
         </div>
       )}
     </div>
