@@ -80,6 +80,60 @@ describe('sectionBlockLayout', () => {
   });
 });
 
+describe('the outlines of a flange-bolted tee, as a published teaching calc enumerates them', () => {
+  // N. Holtz, CIVE 3205 notebooks (Carleton University), Tension-Members/tee-block-shear.ipynb: WT345x85
+  // (b 256, t 23.6, d 347, w 14.5 mm) bolted through its flange by four M20 (hd 24 mm), g 130, e 30,
+  // s 75 mm, 350W; its cases 1–6 as the published formulas, with the flat-element area in place of the
+  // tabulated A (A − (d − k)w becomes b·t: the fillets are not modelled) so the areas are the engine's.
+  const [b, t, d, w, g, e, s, hd] = [256, 23.6, 347, 14.5, 130, 30, 75, 24];
+  const A = b * t + (d - t) * w;
+  const holes = [-g / 2, g / 2].flatMap((gauge) =>
+    [0, s].map((x) => ({ id: `${gauge < 0 ? 'L' : 'R'}${x}`, element: 'flange', x, gauge, deducted: hd })),
+  );
+  const layout = sectionBlockLayout(unfold(tee(b, t, d, w), holes), ['flange'], '-x', s + e);
+  const published = [
+    { case: 1, kind: 'to-edges', An: (b - (g + hd)) * t, Agv: 2 * (e + s) * t, Ut: 0.9 },
+    { case: 2, kind: 'to-edges+root', An: b * t - 2 * hd * t, Agv: (e + s) * w, Ut: 1.0 },
+    { case: 3, kind: 'two-plane+root', An: (g - hd) * t, Agv: (e + s) * w + 2 * (e + s) * t, Ut: 1.0 },
+    { case: 4, kind: 'to-edge', An: A - (b - g) * t - hd * t, Agv: 2 * (e + s) * t, Ut: 0.6 },
+    {
+      case: 5,
+      kind: 'to-edge+root',
+      An: b * t - (b / 2 - g / 2) * t - 1.5 * hd * t,
+      Agv: (e + s) * (w + t),
+      Ut: 0.6,
+    },
+    { case: 6, kind: 'to-edges', An: A - (b / 2 - g / 2) * t - 1.5 * hd * t, Agv: (e + s) * t, Ut: 0.6 },
+  ];
+  const outlines = blockOutlines(layout);
+
+  it('finds each of the published cases 1–6 with the same kind and areas', () => {
+    for (const p of published) {
+      const found = outlines.find(
+        (o) => o.kind === p.kind && Math.abs(o.Ant - p.An) < 1e-6 && Math.abs(o.Agv - p.Agv) < 1e-6,
+      );
+      expect(found, `case ${p.case}`).toBeDefined();
+    }
+    // Case 7 (the bolt lines stripped out in shear alone, no tension) is bolt tear-out, not an outline.
+    expect(outlines.every((o) => o.Ant > 0)).toBe(true);
+  });
+
+  it('with the published Ut per case, case 5 governs, as published (flange torn to one tip, stem cut)', () => {
+    const Tr = (An: number, Agv: number, Ut: number) => (0.75 * (Ut * An * 450 + 0.6 * Agv * 400)) / 1000;
+    const least = published.reduce((m, p) => (Tr(p.An, p.Agv, p.Ut) < Tr(m.An, m.Agv, m.Ut) ? p : m));
+    expect(least.case).toBe(5);
+    // The kind table cannot tell case 1 (0.9) from case 6 (0.6): both reach two free edges. Case 6 is far
+    // from governing either way.
+    const r = blockShear(
+      layout,
+      { standard: 'CSA S16', Fy: 350, Fu: 450, Ut: 1 },
+      { 'to-edges': 0.9, 'to-edge': 0.6, 'to-edge+root': 0.6 },
+    );
+    expect(r.governing!.kind).toBe('to-edge+root');
+    expect(r.governing!.strength.available).toBeCloseTo(Tr(least.An, least.Agv, 0.6), 9);
+  });
+});
+
 /**
  * Independent brute force: a tee (flange with bolt lines, stem) drawn as stretches by hand. Every
  * choice of stretches that keeps every bolt line on or inside the block and has a shear plane is an
