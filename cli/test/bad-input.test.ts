@@ -1,7 +1,9 @@
-import { copyFileSync, mkdirSync, symlinkSync, writeFileSync } from 'node:fs';
+import { execFile, execFileSync, spawn } from 'node:child_process';
+import { closeSync, copyFileSync, mkdirSync, openSync, symlinkSync, writeFileSync } from 'node:fs';
+import { createServer, type Socket } from 'node:net';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { EXAMPLES, run, runBin, tempDir } from './helpers.js';
+import { BIN, EXAMPLES, run, runBin, tempDir } from './helpers.js';
 
 // One directory holding every kind of bad input next to one good file; the binary must report each
 // clearly (file, line:col, rule, pointer), still check the good file, exit 2, and never print a stack.
@@ -95,5 +97,125 @@ describe('bad input', () => {
     expect(badCommand.exitCode).toBe(2);
     expect(badCommand.stderr).toContain('(Did you mean check?)');
     for (const r of [unknown, noArgs, badCommand]) expect(r.stderr).not.toMatch(/\n\s+at /);
+  });
+});
+
+/** Runs the built binary without blocking this process (a server in this process must answer). */
+function runBinAsync(
+  args: readonly string[],
+  cwd: string,
+): Promise<{ stdout: string; stderr: string; exitCode: number }> {
+  return new Promise((resolve) => {
+    execFile(process.execPath, [BIN, ...args], { cwd, encoding: 'utf8' }, (err, stdout, stderr) => {
+      const code = err ? (typeof err.code === 'number' ? err.code : -1) : 0;
+      resolve({ stdout, stderr, exitCode: code });
+    });
+  });
+}
+
+describe('input that never ends or never comes', () => {
+  it('refuses a FIFO named on the command line or found in a folder, without opening it for long', () => {
+    const fifoDir = join(dir.path, 'fifo');
+    mkdirSync(fifoDir);
+    execFileSync('mkfifo', [join(fifoDir, 'pipe.json')]);
+    copyFileSync(join(EXAMPLES, 'north-splice-correct.json'), join(fifoDir, 'good.json'));
+    // No writer ever opens the FIFO: a blocking open or read would hang here.
+    const named = runBin(['check', 'fifo/pipe.json'], { cwd: dir.path });
+    expect(named.exitCode).toBe(2);
+    expect(named.stdout).toMatch(
+      /fifo\/pipe\.json:1:1 {2}ERROR {3}not-a-file is a named pipe \(FIFO\), not a regular file/,
+    );
+    const walked = runBin(['validate', 'fifo'], { cwd: dir.path });
+    expect(walked.exitCode).toBe(2);
+    expect(walked.stdout).toMatch(/fifo\/pipe\.json:1:1 {2}ERROR {3}not-a-file /);
+    expect(walked.stdout).toContain('fifo/good.json');
+  });
+
+  it('refuses /dev/zero named as a file (a character device that never ends)', () => {
+    const r = runBin(['validate', '/dev/zero']);
+    expect(r.exitCode).toBe(2);
+    expect(r.stdout).toMatch(
+      /\/dev\/zero:1:1 {2}ERROR {3}not-a-file is a character device, not a regular file/,
+    );
+  });
+
+  it('stops reading standard input at the size cap: ligament check - < /dev/zero exits 2', async () => {
+    const zero = openSync('/dev/zero', 'r');
+    try {
+      const child = spawn(process.execPath, [BIN, 'check', '-'], { stdio: [zero, 'pipe', 'pipe'] });
+      let stdout = '';
+      child.stdout.setEncoding('utf8').on('data', (s: string) => (stdout += s));
+      const code = await new Promise<number | null>((resolve) => child.on('close', resolve));
+      expect(code).toBe(2);
+      expect(stdout).toMatch(
+        /<stdin>:1:1 {2}ERROR {3}file-too-large standard input holds more than 4\.0 MB; calc files over 4\.0 MB are refused/,
+      );
+    } finally {
+      closeSync(zero);
+    }
+  });
+
+  it('submit gives up on a server that accepts the connection and never answers: exit 2 after --timeout', async () => {
+    const sockets: Socket[] = [];
+    const server = createServer((socket) => void sockets.push(socket));
+    await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+    const { port } = server.address() as { port: number };
+    copyFileSync(join(EXAMPLES, 'north-splice-correct.json'), join(dir.path, 'submit.json'));
+    try {
+      const r = await runBinAsync(
+        [
+          'submit',
+          '--server',
+          `http://127.0.0.1:${port}`,
+          '--token',
+          'lgt_x',
+          '--project',
+          '1',
+          '--timeout',
+          '300ms',
+          'submit.json',
+        ],
+        dir.path,
+      );
+      expect(r.exitCode).toBe(2);
+      expect(r.stderr).toContain(
+        `ligament submit: no answer from http://127.0.0.1:${port}/ within 300 ms (--timeout)`,
+      );
+      expect(sockets.length).toBeGreaterThan(0);
+    } finally {
+      for (const s of sockets) s.destroy();
+      await new Promise((resolve) => server.close(resolve));
+    }
+  });
+
+  it('submit exits 2 with the cause when the server cannot be reached', async () => {
+    // A port that was just free: nothing listens on it.
+    const probe = createServer();
+    await new Promise<void>((resolve) => probe.listen(0, '127.0.0.1', resolve));
+    const { port } = probe.address() as { port: number };
+    await new Promise((resolve) => probe.close(resolve));
+    const r = await runBinAsync(
+      ['submit', '--server', `http://127.0.0.1:${port}`, '--token', 'lgt_x', '--project', '1', 'submit.json'],
+      dir.path,
+    );
+    expect(r.exitCode).toBe(2);
+    expect(r.stderr).toMatch(/ligament submit: cannot reach http:\/\/127\.0\.0\.1:\d+\/: .*ECONNREFUSED/);
+  });
+
+  it('--timeout takes a duration and refuses anything else (usage, exit 2)', async () => {
+    const r = await run([
+      'submit',
+      '--server',
+      'http://127.0.0.1:1',
+      '--token',
+      't',
+      '--project',
+      '1',
+      '--timeout',
+      'soon',
+      'x.json',
+    ]);
+    expect(r.exitCode).toBe(2);
+    expect(r.stderr).toContain('expected a duration such as 60s, 500ms or 2m');
   });
 });

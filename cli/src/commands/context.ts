@@ -10,7 +10,8 @@ export interface CliIO {
   readonly stdout: (text: string) => void;
   /** Diagnostics. */
   readonly stderr: (text: string) => void;
-  readonly readStdin: () => Promise<string>;
+  /** Reads standard input as UTF-8, stopping once more than `maxBytes` bytes have come. */
+  readonly readStdin: (maxBytes: number) => Promise<string>;
   readonly cwd: string;
   readonly env: Readonly<Record<string, string | undefined>>;
   readonly stdoutIsTTY: boolean;

@@ -20,6 +20,21 @@ export function parsePositiveInt(max: number) {
   };
 }
 
+/** Longest `--timeout`: a day. */
+const MAX_TIMEOUT_MS = 24 * 60 * 60 * 1000;
+
+/**
+ * `--timeout 60s`: a duration in milliseconds. Accepts `500ms`, `30s`, `2m`, or a bare number of
+ * seconds; from 1 ms to a day.
+ */
+export function durationArg(value: string): number {
+  const m = /^(\d+(?:\.\d+)?)\s*(ms|s|m)?$/.exec(value.trim());
+  const ms = m ? Number(m[1]) * (m[2] === 'ms' ? 1 : m[2] === 'm' ? 60_000 : 1000) : NaN;
+  if (!Number.isFinite(ms) || ms < 1 || ms > MAX_TIMEOUT_MS)
+    throw new InvalidArgumentError('expected a duration such as 60s, 500ms or 2m (at most 24 hours)');
+  return Math.round(ms);
+}
+
 export function toleranceArg(value: string, previous: ToleranceSpec | undefined): ToleranceSpec {
   try {
     return collectTolerance(value, previous);

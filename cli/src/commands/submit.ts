@@ -2,7 +2,7 @@ import { Command, Option } from './commander.js';
 import { CAUTION, failingSeverities, type ExitCode, type FailOn } from '../runner/types.js';
 import type { CalcError } from '../calc/types.js';
 import { EXIT_CODES_HELP, setExitCode, UsageError, type CliContext } from './context.js';
-import { parsePositiveInt } from './options.js';
+import { durationArg, parsePositiveInt } from './options.js';
 
 interface SubmitFlags {
   server?: string;
@@ -12,7 +12,11 @@ interface SubmitFlags {
   revisionOf?: number;
   failOn: FailOn;
   format: 'text' | 'json';
+  timeout: number;
 }
+
+/** How long `submit` waits for the service's whole answer unless --timeout says otherwise. */
+export const DEFAULT_SUBMIT_TIMEOUT = '60s';
 
 /** What the service answers for an accepted upload (POST /api/projects/:id/submittals, 201). */
 export interface SubmitSummary {
@@ -47,6 +51,8 @@ export interface SubmitRequest {
   readonly revisionOf?: number;
   readonly failOn: FailOn;
   readonly format: 'text' | 'json';
+  /** Milliseconds to wait for the whole answer (headers and body) before giving up, exit 2 (default 60 s). */
+  readonly timeoutMs?: number;
   readonly files: readonly { readonly name: string; readonly text: string }[];
 }
 
@@ -58,7 +64,7 @@ export interface SubmitOutcome {
 
 type Fetch = (
   url: string,
-  init: { method: string; headers: Record<string, string>; body: FormData },
+  init: { method: string; headers: Record<string, string>; body: FormData; signal: AbortSignal },
 ) => Promise<{
   status: number;
   text(): Promise<string>;
@@ -66,6 +72,13 @@ type Fetch = (
 
 function calcErrorLine(e: CalcError): string {
   return `${e.file}:${e.line}:${e.column}  ${e.rule}  ${e.message}`;
+}
+
+/** `60 s`, `500 ms`, `2 min`. */
+function formatDuration(ms: number): string {
+  if (ms < 1000) return `${ms} ms`;
+  if (ms % 60_000 === 0) return `${ms / 60_000} min`;
+  return `${ms / 1000} s`;
 }
 
 /** The summary as a few lines of text: counts, the worst finding, where to see it. */
@@ -88,7 +101,8 @@ export function formatSubmitSummary(r: SubmitSummary): string {
 /**
  * Uploads calc files as one submittal and turns the answer into output and an exit code, the same
  * codes as `check`: 0 nothing at or above --fail-on, 1 findings at or above it, 2 invalid input
- * (the server's 422 with every CalcError), usage, authentication or any other failure.
+ * (the server's 422 with every CalcError), usage, authentication, a server that cannot be reached
+ * or does not answer within the timeout, or any other failure.
  */
 export async function runSubmit(req: SubmitRequest, fetchImpl: Fetch): Promise<SubmitOutcome> {
   const form = new FormData();
@@ -98,15 +112,27 @@ export async function runSubmit(req: SubmitRequest, fetchImpl: Fetch): Promise<S
   const url = `${req.server.replace(/\/+$/, '')}/api/projects/${req.projectId}/submittals`;
   let status: number;
   let body: string;
+  // One deadline for connecting, sending and the whole answer: a server that accepts the
+  // connection and never answers must not hold a CI job until its own limit.
+  const timeoutMs = req.timeoutMs ?? durationArg(DEFAULT_SUBMIT_TIMEOUT);
+  const signal = AbortSignal.timeout(timeoutMs);
   try {
     const res = await fetchImpl(url, {
       method: 'POST',
       headers: { Authorization: `Bearer ${req.token}` },
       body: form,
+      signal,
     });
     status = res.status;
     body = await res.text();
   } catch (err) {
+    if (signal.aborted) {
+      return {
+        stdout: '',
+        stderr: `ligament submit: no answer from ${req.server} within ${formatDuration(timeoutMs)} (--timeout); nothing is known to be uploaded\n`,
+        exitCode: 2,
+      };
+    }
     const cause = err instanceof Error && err.cause instanceof Error ? `: ${err.cause.message}` : '';
     return { stdout: '', stderr: `ligament submit: cannot reach ${req.server}${cause}\n`, exitCode: 2 };
   }
@@ -167,13 +193,21 @@ export function submitCommand(ctx: CliContext): Command {
     .addOption(
       new Option('-f, --format <format>', 'summary format').choices(['text', 'json']).default('text'),
     )
+    .option(
+      '--timeout <duration>',
+      'give up (exit 2) when the service has not answered in full within this time: 60s, 500ms, 2m',
+      durationArg,
+      durationArg(DEFAULT_SUBMIT_TIMEOUT),
+    )
     .addHelpText(
       'after',
       `
 Examples:
   $ ligament submit --server http://localhost:3000 --token lgt_… --project 1 calcs/
   $ LIGAMENT_SERVER=https://ligament.example.test LIGAMENT_TOKEN=lgt_… ligament submit --project 1 --revision-of 12 calcs/
-${EXIT_CODES_HELP}`,
+${EXIT_CODES_HELP}
+     (submit: also a server that cannot be reached or does not answer within --timeout,
+     a refused token, or any answer other than 201)`,
     )
     .action(async (paths: string[], flags: SubmitFlags) => {
       const server = flags.server ?? ctx.io.env['LIGAMENT_SERVER'];
@@ -210,6 +244,7 @@ ${EXIT_CODES_HELP}`,
           ...(flags.revisionOf !== undefined ? { revisionOf: flags.revisionOf } : {}),
           failOn: flags.failOn,
           format: flags.format,
+          timeoutMs: flags.timeout,
           files,
         },
         (url, init) => fetch(url, init),

@@ -5,7 +5,7 @@ export function processIO(): CliIO {
   return {
     stdout: (text) => void process.stdout.write(text),
     stderr: (text) => void process.stderr.write(text),
-    readStdin: async () => (await import('./sources.js')).readStream(process.stdin),
+    readStdin: async (maxBytes) => (await import('./sources.js')).readStream(process.stdin, maxBytes),
     cwd: process.cwd(),
     env: process.env,
     stdoutIsTTY: process.stdout.isTTY === true,
