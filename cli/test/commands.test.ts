@@ -1,8 +1,9 @@
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { loadCalcText } from '../src/calc/index.js';
 import { CLI_ROOT, EXAMPLES, REPO_ROOT, run, runBin, tempDir } from './helpers.js';
+import { parseSvg } from './xml.js';
 
 const ex = (name: string): string => join(EXAMPLES, name);
 
@@ -62,6 +63,14 @@ describe('ligament draw', () => {
       });
       expect(r.exitCode).toBe(0);
       const svg = readFileSync(join(dir.path, 'tie.svg'), 'utf8');
+      const doc = parseSvg(svg);
+      // Each hole is white-filled once (a second fill attribute is an XML error browsers stop at).
+      const holes = [
+        ...Array.from(doc.getElementsByTagName('circle')),
+        ...Array.from(doc.getElementsByTagName('path')),
+      ].filter((e) => e.hasAttribute('data-hole'));
+      expect(holes).toHaveLength(4);
+      for (const h of holes) expect(h.getAttribute('fill')).toBe('#ffffff');
       expect(svg).toMatch(
         /^<svg xmlns="http:\/\/www\.w3\.org\/2000\/svg"[^>]* width="[\d.]+mm" height="[\d.]+mm"/,
       );
@@ -84,9 +93,25 @@ describe('ligament draw', () => {
   it('prints the SVG to stdout without -o and picks the only member without --member', async () => {
     const r = await run(['draw', ex('north-splice-correct.json')]);
     expect(r.exitCode).toBe(0);
+    parseSvg(r.stdout);
     expect(r.stdout).toContain('data-fracture="-x +x" data-chain="A1 B1 C1 D1"');
     expect(r.stdout).toContain('>2 1/2</text>');
   });
+});
+
+describe('ligament draw on every example', () => {
+  const examples = readdirSync(EXAMPLES).filter((f) => f.endsWith('.json'));
+  for (const name of examples) {
+    it(`draws every member of ${name} as well-formed SVG`, async () => {
+      const doc = JSON.parse(readFileSync(ex(name), 'utf8')) as { members: { id: string }[] };
+      for (const { id } of doc.members) {
+        const r = await run(['draw', ex(name), '--member', id]);
+        expect(r.exitCode, `${name} ${id}: ${r.stderr}`).toBe(0);
+        const svg = parseSvg(r.stdout);
+        expect(svg.getElementsByTagName('title')[0]?.textContent).toContain(id);
+      }
+    });
+  }
 });
 
 describe('ligament init', () => {
@@ -102,7 +127,15 @@ describe('ligament init', () => {
         if (loaded.ok) expect(loaded.document.profile.units).toBe(units);
         const c = await run(['check', 'start.json', '--fail-on', 'any'], { cwd: dir.path });
         expect(c.exitCode).toBe(0);
-        expect(c.stdout).toContain('Harbour Lantern Footbridge');
+        expect(c.stdout).toContain('Project name');
+        // Placeholders, never the people, firms or projects of the demo examples.
+        for (const name of readdirSync(EXAMPLES).filter((f) => f.endsWith('.json'))) {
+          const meta = (
+            JSON.parse(readFileSync(join(EXAMPLES, name), 'utf8')) as { meta: Record<string, unknown> }
+          ).meta;
+          for (const key of ['project', 'preparedBy', 'checkedBy', 'firm'])
+            if (typeof meta[key] === 'string') expect(text).not.toContain(meta[key]);
+        }
         const again = await run(['init', '-o', 'start.json'], { cwd: dir.path });
         expect(again.exitCode).toBe(2);
         expect(again.stderr).toContain('start.json exists; pass --force to overwrite it');

@@ -4,6 +4,7 @@ import type { CodeProfile, MemberInput } from '../engine/types.js';
 import { buildDrawing } from './model.js';
 import { slotPath, toSvg } from './svg.js';
 import type { CircleShape, DimensionShape, FractureShape, SlotShape } from './types.js';
+import { parseSvg } from '../../test/xml.js';
 
 // Hole layout of AISC Design Examples v13.0, Example D.9 (R1): 14 × 1/2 in plate, 3/4 in bolts,
 // gauges 2, 3, 4, 3, 2 in, inner lines 2-1/2 in further along.
@@ -88,6 +89,7 @@ describe('buildDrawing', () => {
 
   it('serialises to an SVG sized in millimetres with a title for screen readers', () => {
     const svg = toSvg(drawing);
+    parseSvg(svg);
     expect(svg).toContain(`width="${drawing.width}mm"`);
     expect(svg).toContain('<title>D9: 5 holes, 1/2 × 14 in plate, scale 1:5</title>');
   });

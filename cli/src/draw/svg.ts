@@ -11,10 +11,11 @@ function esc(s: string): string {
   return s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 }
 
-function strokeAttrs(name: StrokeName): string {
+/** Stroke attributes and the one `fill` of the element (an attribute may appear only once in XML). */
+function strokeAttrs(name: StrokeName, fill = 'none'): string {
   const s = STROKES[name];
   const dash = s.dash ? ` stroke-dasharray="${s.dash.map(n).join(' ')}"` : '';
-  return `stroke="${s.colour}" stroke-width="${n(s.width)}"${dash} fill="none" stroke-linecap="round" stroke-linejoin="round"`;
+  return `stroke="${s.colour}" stroke-width="${n(s.width)}"${dash} fill="${fill}" stroke-linecap="round" stroke-linejoin="round"`;
 }
 
 function pts(points: readonly Point[]): string {
@@ -75,9 +76,9 @@ function shapeEl(s: Shape): string {
     case 'polyline':
       return `<${s.closed ? 'polygon' : 'polyline'} points="${pts(s.points)}" ${strokeAttrs(s.stroke)}/>`;
     case 'circle':
-      return `<circle cx="${n(s.centre[0])}" cy="${n(s.centre[1])}" r="${n(s.radius)}" ${strokeAttrs(s.stroke)} fill="#ffffff" data-hole="${esc(s.holeId)}"/>`;
+      return `<circle cx="${n(s.centre[0])}" cy="${n(s.centre[1])}" r="${n(s.radius)}" ${strokeAttrs(s.stroke, '#ffffff')} data-hole="${esc(s.holeId)}"/>`;
     case 'slot':
-      return `<path d="${slotPath(s.centre, s.along, s.across)}" ${strokeAttrs(s.stroke)} fill="#ffffff" data-hole="${esc(s.holeId)}"/>`;
+      return `<path d="${slotPath(s.centre, s.along, s.across)}" ${strokeAttrs(s.stroke, '#ffffff')} data-hole="${esc(s.holeId)}"/>`;
     case 'dimension':
       return [
         `<g data-dimension="${s.measure}" data-value="${n(s.value)}">`,

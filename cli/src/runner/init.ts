@@ -1,6 +1,6 @@
 /**
  * The calc file `ligament init` writes: one staggered splice plate, loaded from either end, with
- * no claims yet, in the fictional demo project. Pure: the date comes in.
+ * no claims yet, and placeholders for the project, the author and the firm (never the demo's people). Pure: the date comes in.
  */
 import type { UnitSystem } from '../engine/types.js';
 
@@ -50,9 +50,9 @@ export function starterCalc(options: InitOptions): Record<string, unknown> {
     format: 'ligament-calc',
     formatVersion: '1.0',
     meta: {
-      project: 'Harbour Lantern Footbridge',
-      preparedBy: 'Priya Halvorsen',
-      firm: 'Fennick & Ode Structural',
+      project: 'Project name',
+      preparedBy: 'Your name',
+      firm: 'Your firm',
       date: options.date,
       tool: { name: 'ligament', version: options.version },
       reference: 'Starter file from ligament init: replace the member with your own',
