@@ -144,6 +144,7 @@ describe('input that never ends or never comes', () => {
     try {
       const child = spawn(process.execPath, [BIN, 'check', '-'], { stdio: [zero, 'pipe', 'pipe'] });
       let stdout = '';
+      if (!child.stdout) throw new Error('no stdout pipe');
       child.stdout.setEncoding('utf8').on('data', (s: string) => (stdout += s));
       const code = await new Promise<number | null>((resolve) => child.on('close', resolve));
       expect(code).toBe(2);
