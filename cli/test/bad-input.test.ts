@@ -3,7 +3,7 @@ import { closeSync, copyFileSync, mkdirSync, openSync, symlinkSync, writeFileSyn
 import { createServer, type Socket } from 'node:net';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { BIN, EXAMPLES, run, runBin, tempDir } from './helpers.js';
+import { BIN, EXAMPLES, INVALID_EXAMPLES, run, runBin, tempDir } from './helpers.js';
 
 // One directory holding every kind of bad input next to one good file; the binary must report each
 // clearly (file, line:col, rule, pointer), still check the good file, exit 2, and never print a stack.
@@ -15,8 +15,8 @@ beforeAll(() => {
   mkdirSync(join(calcs, 'nested'), { recursive: true });
   copyFileSync(join(EXAMPLES, 'north-splice-correct.json'), join(calcs, 'good.json'));
   writeFileSync(join(calcs, 'malformed.json'), '{ "format": "ligament-calc", "members": [ }\n');
-  copyFileSync(join(EXAMPLES, 'invalid', 'wrong-type.json'), join(calcs, 'wrong-type.json'));
-  copyFileSync(join(EXAMPLES, 'invalid', 'unknown-unit.json'), join(calcs, 'nested', 'unknown-unit.json'));
+  copyFileSync(join(INVALID_EXAMPLES, 'wrong-type.json'), join(calcs, 'wrong-type.json'));
+  copyFileSync(join(INVALID_EXAMPLES, 'unknown-unit.json'), join(calcs, 'nested', 'unknown-unit.json'));
   writeFileSync(join(calcs, 'empty.json'), '');
   // 20 MB of whitespace-padded JSON: refused on its size before it is read.
   writeFileSync(

@@ -1,7 +1,7 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { EXAMPLES, lineOf, run, tempDir } from './helpers.js';
+import { EXAMPLES, INVALID_EXAMPLES, lineOf, run, tempDir } from './helpers.js';
 
 const ex = (name: string): string => join(EXAMPLES, name);
 
@@ -196,8 +196,14 @@ describe('ligament check', () => {
     expect(lines.at(-1)).toMatch(/^exit 1/);
   });
 
-  it('checks a whole directory, skipping JSON that is not a calc file, and exits 2 for the invalid ones', async () => {
-    const { doc, exitCode } = await checkJson([EXAMPLES]);
+  it('validate schema/examples/ passes: every example there is valid (the invalid ones live in schema/invalid-examples/)', async () => {
+    const r = await run(['validate', 'schema/examples/']);
+    expect(r.exitCode, r.stdout).toBe(0);
+    expect(r.stdout).not.toMatch(/ERROR/);
+  });
+
+  it('checks whole directories, skipping JSON that is not a calc file, and exits 2 for the invalid ones', async () => {
+    const { doc, exitCode } = await checkJson([EXAMPLES, INVALID_EXAMPLES]);
     expect(exitCode).toBe(2);
     const names = doc.files.map((f) => f.file);
     expect(names.some((n) => n.endsWith('.expected.json'))).toBe(false);
@@ -215,11 +221,11 @@ describe('ligament check', () => {
         'south-hanger-missed-chain.json',
       ]),
     );
-    // Every file under invalid/ is reported as invalid, none as checked.
-    const underInvalid = doc.files.filter((f) => f.file.includes('/invalid/'));
+    // Every file under invalid-examples/ is reported as invalid, none as checked.
+    const underInvalid = doc.files.filter((f) => f.file.includes('/invalid-examples/'));
     expect(underInvalid.length).toBeGreaterThan(10);
     for (const f of underInvalid) expect(f.status, f.file).toBe('invalid');
-    const wrongType = doc.files.find((f) => f.file.endsWith('invalid/wrong-type.json'))!;
+    const wrongType = doc.files.find((f) => f.file.endsWith('invalid-examples/wrong-type.json'))!;
     expect(wrongType.errors[0]).toMatchObject({ rule: 'type', pointer: '/members/0/thickness' });
   });
 });

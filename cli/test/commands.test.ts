@@ -2,7 +2,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { loadCalcText } from '../src/calc/index.js';
-import { CLI_ROOT, EXAMPLES, REPO_ROOT, run, runBin, tempDir } from './helpers.js';
+import { CLI_ROOT, EXAMPLES, INVALID_EXAMPLES, REPO_ROOT, run, runBin, tempDir } from './helpers.js';
 import { parseSvg } from './xml.js';
 
 const ex = (name: string): string => join(EXAMPLES, name);
@@ -48,7 +48,7 @@ describe('ligament chains', () => {
     expect(r.exitCode).toBe(2);
     expect(r.stderr).toContain('no member "X9" in');
     expect(r.stderr).toContain('(members: SP-N1)');
-    const bad = await run(['chains', ex('invalid/wrong-type.json')]);
+    const bad = await run(['chains', join(INVALID_EXAMPLES, 'wrong-type.json')]);
     expect(bad.exitCode).toBe(2);
     expect(bad.stderr).toMatch(/wrong-type\.json:19:20 {2}ERROR {3}type /);
   });

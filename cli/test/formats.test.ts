@@ -12,8 +12,9 @@ const ALL = [
   'approach-gusset-slots.json',
   'deck-tie-slotted-mm.json',
   'rail-post-splice-2010-one-inch.json',
-  'invalid/wrong-type.json',
-].map((n) => `schema/examples/${n}`);
+]
+  .map((n) => `schema/examples/${n}`)
+  .concat('schema/invalid-examples/wrong-type.json');
 
 describe('--format json', () => {
   it('is a ligament-result 1.0 document that validates against schema/result.schema.json', async () => {
@@ -94,7 +95,7 @@ describe('--format sarif', () => {
   });
 
   it('reports an invalid file as results too, located at the bad value', async () => {
-    const r = await run(['check', '--format', 'sarif', 'schema/examples/invalid/wrong-type.json']);
+    const r = await run(['check', '--format', 'sarif', 'schema/invalid-examples/wrong-type.json']);
     expect(r.exitCode).toBe(2);
     const run0 = (JSON.parse(r.stdout) as SarifLog).runs[0]!;
     expect(run0.results).toHaveLength(1);
@@ -115,7 +116,7 @@ describe('--format junit', () => {
       'junit',
       'schema/examples/north-splice-correct.json',
       'schema/examples/deck-gusset-overstated.json',
-      'schema/examples/invalid/wrong-type.json',
+      'schema/invalid-examples/wrong-type.json',
     ]);
     const xml = r.stdout;
     expect(xml.startsWith('<?xml version="1.0" encoding="UTF-8"?>')).toBe(true);
@@ -129,7 +130,7 @@ describe('--format junit', () => {
     expect(xml).toMatch(/<testcase name="G-D2 claimed chains"[^>]*>\s*<failure message="LG124 /);
     expect(xml).toMatch(/<testcase name="SP-N1 areas and strengths" [^>]*\/>/);
     expect(xml).toMatch(
-      /<error message="type: [^"]*" type="type">schema\/examples\/invalid\/wrong-type\.json:19:20/,
+      /<error message="type: [^"]*" type="type">schema\/invalid-examples\/wrong-type\.json:19:20/,
     );
   });
 });

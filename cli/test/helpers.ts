@@ -16,6 +16,8 @@ import { runProgram } from '../src/program.js';
 export const CLI_ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 export const REPO_ROOT = resolve(CLI_ROOT, '..');
 export const EXAMPLES = join(REPO_ROOT, 'schema', 'examples');
+/** One invalid calc file per kind of error, kept out of examples/ so `ligament validate schema/examples/` passes. */
+export const INVALID_EXAMPLES = join(REPO_ROOT, 'schema', 'invalid-examples');
 export const FIXTURES = join(CLI_ROOT, 'test', 'fixtures');
 export const BIN = join(CLI_ROOT, 'dist', 'cli.js');
 

@@ -6,7 +6,7 @@ import { loadCalcText } from './loadCalcText.js';
 import type { CalcDocument, CalcError, LoadResult } from './types.js';
 
 const EXAMPLES = new URL('../../../schema/examples/', import.meta.url);
-const INVALID = new URL('invalid/', EXAMPLES);
+const INVALID = new URL('../../../schema/invalid-examples/', import.meta.url);
 
 function example(name: string): string {
   return readFileSync(new URL(name, EXAMPLES), 'utf8');
