@@ -32,6 +32,9 @@ export const TOKEN_VARIABLE = 'LIGAMENT_TOKEN';
  */
 export function ciSnippet({ serverUrl, projectId }: CiSnippetProps): string {
   return [
+    '# Install the ligament tarball kept in the repository (made with npm pack -w cli; not on the npm registry).',
+    'npm install --no-save ./tools/ligament-0.1.0.tgz',
+    '',
     '# Check every calc file; fail the build on an overstated claim, write SARIF for code review.',
     "npx ligament check --format sarif --fail-on overstated 'calc/**/*.json' > ligament.sarif",
     '',
