@@ -21,6 +21,8 @@ describe('npm pack', () => {
       const [{ filename, files }] = JSON.parse(packed) as [{ filename: string; files: { path: string }[] }];
       const paths = files.map((f) => f.path);
       expect(paths).toContain('dist/cli.js');
+      // The bin is the committed launcher, which loads dist/cli.js.
+      expect(paths).toContain('bin/ligament.js');
       expect(paths).toContain('schema/calc.schema.json');
       expect(paths).toContain('schema/result.schema.json');
       expect(paths).toContain('README.md');
