@@ -126,7 +126,7 @@ export class HotReadsService implements OnApplicationShutdown {
     const db = await new Promise<sqlite3.Database>((resolve, reject) => {
       const handle: sqlite3.Database = new sqlite3.Database(
         this.config.storage,
-        sqlite3.OPEN_READONLY,
+        sqlite3.OPEN_READONLY | sqlite3.OPEN_URI,
         (err) => (err ? reject(err) : resolve(handle)),
       );
     });

@@ -9,7 +9,9 @@ import { DatabaseService } from '../database/database.service.js';
 import { MailService } from '../mail/mail.service.js';
 
 class DatabaseHealthDto {
-  @ApiProperty() ok: boolean;
+  @ApiProperty({ description: 'Readable and writable' }) ok: boolean;
+  @ApiProperty({ description: 'The last write (a request’s or the heartbeat’s) committed' })
+  writable: boolean;
   @ApiProperty({ required: false }) error?: string;
 }
 
@@ -46,11 +48,12 @@ export class HealthController {
   @Get()
   @Public()
   @ApiOperation({
-    summary: 'Public: database and mail status (503 when the database is down; mail trouble only degrades)',
+    summary:
+      'Public: database and mail status (503 when the database cannot be read or written; mail trouble only degrades)',
   })
   @ApiOkResponse({ type: HealthDto })
   async health(@Res({ passthrough: true }) res: Response): Promise<HealthDto> {
-    const database = await this.database.ping();
+    const database = await this.database.health();
     const mail = database.ok
       ? await this.mail.health()
       : {

@@ -29,6 +29,8 @@ export class Discrepancy extends Model {
   @Column({ type: DataType.TEXT, allowNull: false }) declare message: string;
   @Column({ type: DataType.STRING, allowNull: false }) declare pointer: string;
   @Column({ type: DataType.STRING, allowNull: false }) declare status: DiscrepancyStatus;
+  /** Raised by every move: the compare-and-set of a move checks status and version (migration 0004). */
+  @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 0 }) declare version: number;
   @Column({ type: DataType.DATE, allowNull: true }) declare acknowledgedAt: Date | null;
   @ForeignKey(() => User) @Column({ type: DataType.INTEGER, allowNull: true }) declare acknowledgedById:
     number | null;

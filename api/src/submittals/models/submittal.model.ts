@@ -31,4 +31,6 @@ export class Submittal extends Model {
     number | null;
   @BelongsTo(() => User, 'stampedById') declare stampedBy?: User;
   @Column({ type: DataType.DATE, allowNull: true }) declare stampedAt: Date | null;
+  /** Raised by the stamp: the stamp is a compare-and-set on (unstamped, version) (migration 0004). */
+  @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 0 }) declare version: number;
 }
