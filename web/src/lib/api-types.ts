@@ -4,2360 +4,2393 @@
  */
 
 export interface paths {
-    "/api/auth/login": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Sign in with e-mail and password (failed attempts limited per account and per client address) */
-        post: operations["AuthController_login"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+  '/api/auth/login': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/auth/me": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The caller (a signed-in user or an API token’s owner) */
-        get: operations["AuthController_me"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Sign in with e-mail and password (failed attempts limited per account and per client address) */
+    post: operations['AuthController_login'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/auth/me': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/users": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Admin: every user */
-        get: operations["UsersController_list"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The caller (a signed-in user or an API token’s owner) */
+    get: operations['AuthController_me'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/users': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/users/{userId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        /** Admin: change a user’s role, name, firm or active flag */
-        patch: operations["UsersController_update"];
-        trace?: never;
+    /** Admin: every user */
+    get: operations['UsersController_list'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/users/{userId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/invitations": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Admin: every invitation, newest first */
-        get: operations["InvitationsController_list"];
-        put?: never;
-        /** Admin: invite someone by e-mail (the one-time link goes out through the outbox) */
-        post: operations["InvitationsController_create"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    /** Admin: change a user’s role, name, firm or active flag */
+    patch: operations['UsersController_update'];
+    trace?: never;
+  };
+  '/api/invitations': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/invitations/{token}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Public: what an invitation link is for (404 unknown, 410 used or expired) */
-        get: operations["InvitationsController_preview"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Admin: every invitation, newest first */
+    get: operations['InvitationsController_list'];
+    put?: never;
+    /** Admin: invite someone by e-mail (the one-time link goes out through the outbox) */
+    post: operations['InvitationsController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/invitations/{token}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/invitations/{token}/accept": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Public: set a password with the one-time link; the account is then active */
-        post: operations["InvitationsController_accept"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Public: what an invitation link is for (404 unknown, 410 used or expired) */
+    get: operations['InvitationsController_preview'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/invitations/{token}/accept': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/mail/mailbox": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Admin, demo mode only: every message the local SMTP fake received, newest first (404 otherwise). Invitation links are in these mails, so only an admin may read them. */
-        get: operations["MailController_listMailbox"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Public: set a password with the one-time link; the account is then active */
+    post: operations['InvitationsController_accept'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/mail/mailbox': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/mail/outbox": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Admin: the outbox with delivery state, newest first */
-        get: operations["MailController_listOutbox"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Admin, demo mode only: every message the local SMTP fake received, newest first (404 otherwise). Invitation links are in these mails, so only an admin may read them. */
+    get: operations['MailController_listMailbox'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/mail/outbox': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/mail/outbox/flush": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Admin: send every due message now instead of waiting for the worker */
-        post: operations["MailController_flush"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Admin: the outbox with delivery state, newest first */
+    get: operations['MailController_listOutbox'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/mail/outbox/flush': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/projects/{projectId}/events": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The project's event log, oldest first */
-        get: operations["EventsController_list"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Admin: send every due message now instead of waiting for the worker */
+    post: operations['MailController_flush'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/projects/{projectId}/events': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/tokens": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Consultant: my API tokens (never the secret) */
-        get: operations["TokensController_list"];
-        put?: never;
-        /** Consultant: create a token for one of my projects; the secret is in this response only */
-        post: operations["TokensController_create"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The project's event log, oldest first */
+    get: operations['EventsController_list'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/tokens': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/tokens/{tokenId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        post?: never;
-        /** Consultant: revoke one of my tokens (it stops working at once) */
-        delete: operations["TokensController_revoke"];
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Consultant: my API tokens (never the secret) */
+    get: operations['TokensController_list'];
+    put?: never;
+    /** Consultant: create a token for one of my projects; the secret is in this response only */
+    post: operations['TokensController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/tokens/{tokenId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/organisations": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Every firm (any signed-in user: names appear on submittals and stamps) */
-        get: operations["OrganisationsController_list"];
-        put?: never;
-        /** Admin: add a firm */
-        post: operations["OrganisationsController_create"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    post?: never;
+    /** Consultant: revoke one of my tokens (it stops working at once) */
+    delete: operations['TokensController_revoke'];
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/organisations': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/projects": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Projects I am a member of (admin: all; API token: its project) */
-        get: operations["ProjectsController_list"];
-        put?: never;
-        /** Admin: create a project */
-        post: operations["ProjectsController_create"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Every firm (any signed-in user: names appear on submittals and stamps) */
+    get: operations['OrganisationsController_list'];
+    put?: never;
+    /** Admin: add a firm */
+    post: operations['OrganisationsController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/projects': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/projects/{projectId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** One project (members, admin, its API tokens) */
-        get: operations["ProjectsController_get"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        /** Admin: rename or re-describe a project */
-        patch: operations["ProjectsController_update"];
-        trace?: never;
+    /** Projects I am a member of (admin: all; API token: its project) */
+    get: operations['ProjectsController_list'];
+    put?: never;
+    /** Admin: create a project */
+    post: operations['ProjectsController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/projects/{projectId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/projects/{projectId}/members": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Who is on the project */
-        get: operations["ProjectsController_members"];
-        put?: never;
-        /** Admin: add a member; answers the new member list */
-        post: operations["ProjectsController_addMember"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** One project (members, admin, its API tokens) */
+    get: operations['ProjectsController_get'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    /** Admin: rename or re-describe a project */
+    patch: operations['ProjectsController_update'];
+    trace?: never;
+  };
+  '/api/projects/{projectId}/members': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/projects/{projectId}/members/{userId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        post?: never;
-        /** Admin: remove a member; answers the new member list */
-        delete: operations["ProjectsController_removeMember"];
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Who is on the project */
+    get: operations['ProjectsController_members'];
+    put?: never;
+    /** Admin: add a member; answers the new member list */
+    post: operations['ProjectsController_addMember'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/projects/{projectId}/members/{userId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/projects/{projectId}/submittals": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The project's submittals, newest first */
-        get: operations["SubmittalsController_list"];
-        put?: never;
-        /**
-         * Upload a submittal: every file validated, every member recomputed, all stored in one transaction
-         * @description Any invalid file answers 422 with every CalcError of every file in `details`, and nothing is stored.
-         */
-        post: operations["SubmittalsController_upload"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    post?: never;
+    /** Admin: remove a member; answers the new member list */
+    delete: operations['ProjectsController_removeMember'];
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/projects/{projectId}/submittals': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/submittals/{submittalId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** One submittal with its summary, stamp and revision links */
-        get: operations["SubmittalsController_get"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The project's submittals, newest first */
+    get: operations['SubmittalsController_list'];
+    put?: never;
+    /**
+     * Upload a submittal: every file validated, every member recomputed, all stored in one transaction
+     * @description Any invalid file answers 422 with every CalcError of every file in `details`, and nothing is stored.
+     */
+    post: operations['SubmittalsController_upload'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/submittals/{submittalId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/submittals/{submittalId}/diff": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** A revision against the submittal it revises: file diffs; discrepancies closed, kept, opened (409 if not a revision) */
-        get: operations["SubmittalsController_diff"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** One submittal with its summary, stamp and revision links */
+    get: operations['SubmittalsController_get'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/submittals/{submittalId}/diff': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/submittals/{submittalId}/recheck": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Checker: re-run the stored files with the current engine and report what changed */
-        post: operations["SubmittalsController_recheck"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** A revision against the submittal it revises: file diffs; discrepancies closed, kept, opened (409 if not a revision) */
+    get: operations['SubmittalsController_diff'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/submittals/{submittalId}/recheck': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/submittals/{submittalId}/stamp": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Checker: stamp with a review action (409 while error-severity discrepancies are open, unless overrideReason) */
-        post: operations["SubmittalsController_stamp"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Checker: re-run the stored files with the current engine and report what changed */
+    post: operations['SubmittalsController_recheck'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/submittals/{submittalId}/stamp': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/submittals/{submittalId}/events": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The submittal's events, oldest first */
-        get: operations["SubmittalsController_listEvents"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Checker: stamp with a review action (409 while error-severity discrepancies are open, unless overrideReason) */
+    post: operations['SubmittalsController_stamp'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/submittals/{submittalId}/events': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/submittals/{submittalId}/files": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The calc files of a submittal (without contents) */
-        get: operations["CalcFilesController_list"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The submittal's events, oldest first */
+    get: operations['SubmittalsController_listEvents'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/submittals/{submittalId}/files': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/calc-files/{fileId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** One calc file with its normalised document */
-        get: operations["CalcFilesController_get"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The calc files of a submittal (without contents) */
+    get: operations['CalcFilesController_list'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/calc-files/{fileId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/calc-files/{fileId}/content": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** The original bytes as uploaded (sha256 in the ETag) */
-        get: operations["CalcFilesController_content"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** One calc file with its normalised document */
+    get: operations['CalcFilesController_get'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/calc-files/{fileId}/content': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/submittals/{submittalId}/results": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Recomputed member results: engine version, profile, inputs hash, per-direction least chains, An, Ae, strengths */
-        get: operations["ResultsController_list"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** The original bytes as uploaded (sha256 in the ETag) */
+    get: operations['CalcFilesController_content'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/submittals/{submittalId}/results': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/projects/{projectId}/discrepancies": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Discrepancies of a project: filters (submittal, class, severity, status, member, code), sort, pages */
-        get: operations["DiscrepanciesController_list"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Recomputed member results: engine version, profile, inputs hash, per-direction least chains, An, Ae, strengths */
+    get: operations['ResultsController_list'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/projects/{projectId}/discrepancies': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/projects/{projectId}/discrepancies/bulk-transition": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Checker: move many discrepancies at once (accepted, returned, waived); all or nothing */
-        post: operations["DiscrepanciesController_bulk"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Discrepancies of a project: filters (submittal, class, severity, status, member, code), sort, pages */
+    get: operations['DiscrepanciesController_list'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/projects/{projectId}/discrepancies/bulk-transition': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/discrepancies/{discrepancyId}": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** One discrepancy with its history, comments and the moves open to the caller */
-        get: operations["DiscrepanciesController_get"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Checker: move many discrepancies at once (accepted, returned, waived); all or nothing */
+    post: operations['DiscrepanciesController_bulk'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/discrepancies/{discrepancyId}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/discrepancies/{discrepancyId}/transitions": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /**
-         * Move a discrepancy: answered (consultant), accepted / returned / waived (checker)
-         * @description 403 wrong role for that move, 409 not allowed from the current status, 400 missing note or reason.
-         */
-        post: operations["DiscrepanciesController_move"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** One discrepancy with its history, comments and the moves open to the caller */
+    get: operations['DiscrepanciesController_get'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/discrepancies/{discrepancyId}/transitions': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/discrepancies/{discrepancyId}/comments": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Consultant or checker: comment on a discrepancy */
-        post: operations["DiscrepanciesController_comment"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /**
+     * Move a discrepancy: answered (consultant), accepted / returned / waived (checker)
+     * @description 403 wrong role for that move, 409 not allowed from the current status, 400 missing note or reason.
+     */
+    post: operations['DiscrepanciesController_move'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/discrepancies/{discrepancyId}/comments': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/discrepancies/{discrepancyId}/acknowledge": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        get?: never;
-        put?: never;
-        /** Owner's rep: acknowledge a discrepancy (their only change; idempotent) */
-        post: operations["DiscrepanciesController_acknowledge"];
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Consultant or checker: comment on a discrepancy */
+    post: operations['DiscrepanciesController_comment'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/discrepancies/{discrepancyId}/acknowledge': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/dashboard": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Owner's-rep dashboard (any role, over the caller's projects): open findings by class, severity, age; trend by submittal */
-        get: operations["ReportsController_dashboard"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    get?: never;
+    put?: never;
+    /** Owner's rep: acknowledge a discrepancy (their only change; idempotent) */
+    post: operations['DiscrepanciesController_acknowledge'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/dashboard': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/dashboard/open-discrepancies.csv": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Every open discrepancy of the caller's projects, as CSV */
-        get: operations["ReportsController_csv"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Owner's-rep dashboard (any role, over the caller's projects): open findings by class, severity, age; trend by submittal */
+    get: operations['ReportsController_dashboard'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/dashboard/open-discrepancies.csv': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/submittals/{submittalId}/report": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Printable review report (HTML): members, governing chains, findings, stamp, caution */
-        get: operations["ReportsController_report"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Every open discrepancy of the caller's projects, as CSV */
+    get: operations['ReportsController_csv'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/submittals/{submittalId}/report': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    "/api/health": {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        /** Public: database and mail status (503 when the database cannot be read or written; mail trouble only degrades) */
-        get: operations["HealthController_health"];
-        put?: never;
-        post?: never;
-        delete?: never;
-        options?: never;
-        head?: never;
-        patch?: never;
-        trace?: never;
+    /** Printable review report (HTML): members, governing chains, findings, stamp, caution */
+    get: operations['ReportsController_report'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/health': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
+    /** Public: database and mail status (503 when the database cannot be read or written; mail trouble only degrades) */
+    get: operations['HealthController_health'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
 }
 export type webhooks = Record<string, never>;
 export interface components {
-    schemas: {
-        LoginDto: {
-            /** @example priya@fennick-ode.example.test */
-            email: string;
-            /** @example lantern-demo-2026 */
-            password: string;
-        };
-        /** @enum {string} */
-        Role: "admin" | "consultant" | "checker" | "owner-rep";
-        UserOrganisationDto: {
-            id: number;
-            name: string;
-        };
-        UserDto: {
-            id: number;
-            email: string;
-            name: string;
-            role: components["schemas"]["Role"];
-            organisationId: number | null;
-            organisation: components["schemas"]["UserOrganisationDto"] | null;
-            active: boolean;
-        };
-        LoginResponseDto: {
-            /** @description Send as `Authorization: Bearer <accessToken>` */
-            accessToken: string;
-            /** @example 8h */
-            expiresIn: string;
-            user: components["schemas"]["UserDto"];
-        };
-        ErrorBody: {
-            /** @example 422 */
-            statusCode: number;
-            /** @example Unprocessable Entity */
-            error: string;
-            /** @example 2 of 10 files are invalid; nothing was stored. */
-            message: string;
-            /** @description Itemised problems: CalcError[] for 422 uploads, {property, constraints} for 400 validation. */
-            details?: {
-                [key: string]: unknown;
-            }[];
-        };
-        MeDto: {
-            id: number;
-            email: string;
-            name: string;
-            role: components["schemas"]["Role"];
-            organisationId: number | null;
-            organisation: components["schemas"]["UserOrganisationDto"] | null;
-            active: boolean;
-            /**
-             * @description How this call was authenticated
-             * @enum {string}
-             */
-            via: "password" | "api-token";
-            /** @description For API tokens: the one project it may use */
-            tokenProjectId: number | null;
-        };
-        UpdateUserDto: {
-            role?: components["schemas"]["Role"];
-            active?: boolean;
-            name?: string;
-            organisationId?: number;
-        };
-        InvitationDto: {
-            id: number;
-            email: string;
-            name: string;
-            role: components["schemas"]["Role"];
-            organisationId: number | null;
-            /** Format: date-time */
-            expiresAt: string;
-            /** Format: date-time */
-            acceptedAt: string | null;
-            /** Format: date-time */
-            createdAt: string;
-        };
-        CreateInvitationDto: {
-            /** @example new.engineer@fennick-ode.example.test */
-            email: string;
-            /** @example Noor Castellan */
-            name: string;
-            role: components["schemas"]["Role"];
-            organisationId?: number;
-        };
-        InvitationPreviewDto: {
-            email: string;
-            name: string;
-            role: components["schemas"]["Role"];
-            organisation: string | null;
-            /** Format: date-time */
-            expiresAt: string;
-        };
-        AcceptInvitationDto: {
-            password: string;
-            /** @description Change the name the admin typed */
-            name?: string;
-        };
-        AcceptedDto: {
-            id: number;
-            email: string;
-        };
-        MailboxMessageDto: {
-            id: number;
-            from: string;
-            to: string;
-            subject: string;
-            text: string;
-            /** Format: date-time */
-            receivedAt: string;
-        };
-        OutboxMessageDto: {
-            id: number;
-            /** @enum {string} */
-            kind: "invitation" | "submittal-checked" | "discrepancy-answered" | "submittal-stamped";
-            to: string;
-            subject: string;
-            /** @enum {string} */
-            status: "pending" | "sent";
-            attempts: number;
-            lastError: string | null;
-            /** Format: date-time */
-            nextAttemptAt: string;
-            /** Format: date-time */
-            sentAt: string | null;
-            /** Format: date-time */
-            createdAt: string;
-        };
-        FlushResultDto: {
-            sent: number;
-            failed: number;
-        };
-        EventActorDto: {
-            id: number;
-            name: string;
-            role: string;
-        };
-        EventDto: {
-            id: number;
-            /** @example discrepancy.answered */
-            type: string;
-            /** Format: date-time */
-            at: string;
-            actor: components["schemas"]["EventActorDto"] | null;
-            projectId: number | null;
-            submittalId: number | null;
-            discrepancyId: number | null;
-            data: {
-                [key: string]: unknown;
-            };
-        };
-        EventPageDto: {
-            items: components["schemas"]["EventDto"][];
-            total: number;
-            page: number;
-            pageSize: number;
-        };
-        TokenDto: {
-            id: number;
-            name: string;
-            projectId: number;
-            /**
-             * @description First characters, to tell tokens apart
-             * @example lgt_3kq9
-             */
-            prefix: string;
-            /** Format: date-time */
-            createdAt: string;
-            /** Format: date-time */
-            lastUsedAt: string | null;
-            /** Format: date-time */
-            revokedAt: string | null;
-        };
-        CreateTokenDto: {
-            /** @example CI — harbour-lantern repo */
-            name: string;
-            /** @description The one project this token may upload to and read */
-            projectId: number;
-        };
-        CreatedTokenDto: {
-            id: number;
-            name: string;
-            projectId: number;
-            /**
-             * @description First characters, to tell tokens apart
-             * @example lgt_3kq9
-             */
-            prefix: string;
-            /** Format: date-time */
-            createdAt: string;
-            /** Format: date-time */
-            lastUsedAt: string | null;
-            /** Format: date-time */
-            revokedAt: string | null;
-            /** @description The token itself. Shown this once; only its sha256 is stored. */
-            token: string;
-        };
-        OrganisationDto: {
-            id: number;
-            name: string;
-            /** @enum {string} */
-            kind: "consultant" | "checker" | "owner" | "operator";
-        };
-        CreateOrganisationDto: {
-            /** @example Fennick & Ode Structural */
-            name: string;
-            /** @enum {string} */
-            kind: "consultant" | "checker" | "owner" | "operator";
-        };
-        ProjectOwnerDto: {
-            id: number;
-            name: string;
-        };
-        ProjectDto: {
-            id: number;
-            name: string;
-            reference: string | null;
-            description: string | null;
-            ownerOrganisation: components["schemas"]["ProjectOwnerDto"] | null;
-            submittalCount: number;
-            /** @description Discrepancies in raised, answered or returned */
-            openDiscrepancyCount: number;
-            /** Format: date-time */
-            createdAt: string;
-        };
-        CreateProjectDto: {
-            /** @example Harbour Lantern Footbridge */
-            name: string;
-            /** @example HLF-2026 */
-            reference?: string;
-            description?: string;
-            ownerOrganisationId?: number;
-        };
-        UpdateProjectDto: {
-            /** @example Harbour Lantern Footbridge */
-            name?: string;
-            /** @example HLF-2026 */
-            reference?: string;
-            description?: string;
-            ownerOrganisationId?: number;
-        };
-        ProjectMemberDto: {
-            id: number;
-            email: string;
-            name: string;
-            role: components["schemas"]["Role"];
-            organisationId: number | null;
-            organisation: components["schemas"]["UserOrganisationDto"] | null;
-            active: boolean;
-            /** Format: date-time */
-            memberSince: string;
-        };
-        AddMemberDto: {
-            userId: number;
-        };
-        CountsByClassDto: {
-            overstated: number;
-            understated: number;
-            "missed-chain": number;
-            "phantom-chain": number;
-            "chain-width": number;
-            "equal-share": number;
-            detailing: number;
-            input: number;
-        };
-        CountsBySeverityDto: {
-            error: number;
-            warning: number;
-            note: number;
-        };
-        WorstFindingDto: {
-            /** @example LG101 */
-            code: string;
-            name: string;
-            /** @enum {string} */
-            class: "overstated" | "understated" | "missed-chain" | "phantom-chain" | "chain-width" | "equal-share" | "detailing" | "input";
-            /** @enum {string} */
-            severity: "error" | "warning" | "note";
-            fileName: string;
-            memberId: string | null;
-            message: string;
-        };
-        SummaryDto: {
-            files: number;
-            members: number;
-            findings: number;
-            byClass: components["schemas"]["CountsByClassDto"];
-            bySeverity: components["schemas"]["CountsBySeverityDto"];
-            worst: components["schemas"]["WorstFindingDto"] | null;
-        };
-        StampDto: {
-            /** @enum {string} */
-            action: "no-exceptions-taken" | "make-corrections-noted" | "revise-and-resubmit" | "rejected";
-            comment: string;
-            overrideReason: string | null;
-            stampedBy: string;
-            /** Format: date-time */
-            stampedAt: string;
-        };
-        SubmittalDto: {
-            id: number;
-            projectId: number;
-            title: string;
-            revisionOfId: number | null;
-            /** @description Submittals that revise this one */
-            revisedBy: number[];
-            submittedBy: string;
-            viaApiToken: boolean;
-            engineVersion: string;
-            /** @enum {string} */
-            status: "checked" | "stamped";
-            summary: components["schemas"]["SummaryDto"];
-            /** @description Discrepancies still raised, answered or returned */
-            openDiscrepancies: number;
-            stamp: components["schemas"]["StampDto"] | null;
-            /** @example /submittals/12 */
-            webPath: string;
-            /** Format: date-time */
-            createdAt: string;
-        };
-        UploadSubmittalBodyDto: {
-            /** @example Splice plates, level 2 deck */
-            title: string;
-            /** @description Id of the submittal this one revises (same project) */
-            revisionOf?: number;
-            /** @description Calc files (.json) */
-            files: string[];
-        };
-        UploadResultDto: {
-            submittalId: number;
-            projectId: number;
-            title: string;
-            revisionOfId: number | null;
-            engineVersion: string;
-            summary: components["schemas"]["SummaryDto"];
-            /** @example /submittals/12 */
-            webPath: string;
-            /** @example http://localhost:3000/submittals/12 */
-            webUrl: string;
-        };
-        FileDiffDto: {
-            /** @enum {string} */
-            change: "changed" | "unchanged" | "added" | "removed";
-            previousFile: string | null;
-            currentFile: string | null;
-            /**
-             * @description How the two files were paired
-             * @enum {string}
-             */
-            matchedBy: "file-name" | "member-ids" | "none";
-            /** @description Unified diff (diff package) of the canonical JSON (sorted keys, 2 spaces); "" when unchanged */
-            patch: string;
-        };
-        DiffDiscrepancyDto: {
-            id: number;
-            code: string;
-            memberId: string | null;
-            chain: string | null;
-            severity: string;
-            status: string;
-            message: string;
-        };
-        KeptDiscrepancyDto: {
-            previous: components["schemas"]["DiffDiscrepancyDto"];
-            current: components["schemas"]["DiffDiscrepancyDto"];
-        };
-        RevisionDiffDto: {
-            submittalId: number;
-            previousSubmittalId: number;
-            files: components["schemas"]["FileDiffDto"][];
-            /** @description In the previous submittal, gone from this one */
-            closed: components["schemas"]["DiffDiscrepancyDto"][];
-            /** @description In both (same code, member and chain) */
-            kept: components["schemas"]["KeptDiscrepancyDto"][];
-            /** @description New in this one */
-            opened: components["schemas"]["DiffDiscrepancyDto"][];
-        };
-        RecheckValueChangeDto: {
-            fileName: string;
-            memberId: string;
-            /** @example An */
-            field: string;
-            stored: number | null;
-            current: number | null;
-        };
-        RecheckFindingDto: {
-            fileName: string;
-            code: string;
-            memberId: string | null;
-            chain: string | null;
-            severity: string;
-            message: string;
-        };
-        RecheckDto: {
-            submittalId: number;
-            storedEngineVersion: string;
-            currentEngineVersion: string;
-            /** @description True when anything below differs */
-            changed: boolean;
-            valueChanges: components["schemas"]["RecheckValueChangeDto"][];
-            newFindings: components["schemas"]["RecheckFindingDto"][];
-            goneFindings: components["schemas"]["RecheckFindingDto"][];
-            unchangedFindings: number;
-            /** @description CalcErrors if a stored file no longer loads */
-            loadErrors: {
-                [key: string]: unknown;
-            }[];
-        };
-        StampSubmittalDto: {
-            /** @enum {string} */
-            action: "no-exceptions-taken" | "make-corrections-noted" | "revise-and-resubmit" | "rejected";
-            comment: string;
-            /** @description Required to stamp while error-severity discrepancies are open */
-            overrideReason?: string;
-        };
-        CalcFileDto: {
-            id: number;
-            submittalId: number;
-            fileName: string;
-            size: number;
-            /** @description sha256 (hex) of the original bytes */
-            sha256: string;
-            memberIds: string[];
-            /** Format: date-time */
-            createdAt: string;
-        };
-        CalcFileDetailDto: {
-            id: number;
-            submittalId: number;
-            fileName: string;
-            size: number;
-            /** @description sha256 (hex) of the original bytes */
-            sha256: string;
-            memberIds: string[];
-            /** Format: date-time */
-            createdAt: string;
-            /** @description The normalised CalcDocument (ligament package types) */
-            document: {
-                [key: string]: unknown;
-            };
-        };
-        CodeProfileDto: {
-            /** @example AISC 360-22 */
-            standard: string;
-            /** @enum {string} */
-            method: "LRFD" | "ASD";
-            /** @enum {string} */
-            units: "in" | "mm";
-        };
-        ChainSummaryDto: {
-            holes: string[];
-            netWidth: number;
-            netArea: number;
-        };
-        DirectionResultDto: {
-            /** @enum {string} */
-            direction: "-x" | "+x";
-            governing: components["schemas"]["ChainSummaryDto"] | null;
-            leastChains: components["schemas"]["ChainSummaryDto"][];
-            An: number;
-        };
-        MemberResultDto: {
-            id: number;
-            submittalId: number;
-            calcFileId: number;
-            fileName: string;
-            memberId: string;
-            engineVersion: string;
-            profile: components["schemas"]["CodeProfileDto"];
-            /** @description sha256 of the canonical member input and profile */
-            inputsHash: string;
-            Ag: number;
-            An: number;
-            Ae: number;
-            U: number;
-            /** @description Available yielding strength */
-            yielding: number;
-            /** @description Available rupture strength */
-            rupture: number;
-            /** @description Governing available strength */
-            available: number;
-            governingDirection: string;
-            directions: components["schemas"]["DirectionResultDto"][];
-            /** @description The engine MemberResult (ligament package types) */
-            result: {
-                [key: string]: unknown;
-            };
-        };
-        DiscrepancyDto: {
-            id: number;
-            projectId: number;
-            submittalId: number;
-            calcFileId: number;
-            fileName: string;
-            memberId: string | null;
-            /** @example LG101 */
-            code: string;
-            /** @example overstated-net-area */
-            name: string;
-            /** @enum {string} */
-            class: "overstated" | "understated" | "missed-chain" | "phantom-chain" | "chain-width" | "equal-share" | "detailing" | "input";
-            /** @enum {string} */
-            severity: "error" | "warning" | "note";
-            /** @enum {string|null} */
-            direction: "-x" | "+x" | null;
-            /** @description Hole ids of the chain or holes concerned */
-            chain: string[];
-            claimed: number | null;
-            recomputed: number | null;
-            message: string;
-            /** @description JSON pointer into the calc file */
-            pointer: string;
-            /** @enum {string} */
-            status: "raised" | "answered" | "accepted" | "returned" | "waived";
-            /** Format: date-time */
-            acknowledgedAt: string | null;
-            /** Format: date-time */
-            createdAt: string;
-            /** Format: date-time */
-            updatedAt: string;
-        };
-        DiscrepancyPageDto: {
-            items: components["schemas"]["DiscrepancyDto"][];
-            total: number;
-            page: number;
-            pageSize: number;
-        };
-        BulkTransitionDto: {
-            ids: number[];
-            /** @enum {string} */
-            to: "accepted" | "returned" | "waived";
-            note?: string;
-        };
-        BulkResultDto: {
-            moved: number;
-            items: components["schemas"]["DiscrepancyDto"][];
-        };
-        CommentViewDto: {
-            id: number;
-            body: string;
-            author: string;
-            authorRole: string;
-            /** Format: date-time */
-            at: string;
-        };
-        DiscrepancyDetailDto: {
-            id: number;
-            projectId: number;
-            submittalId: number;
-            calcFileId: number;
-            fileName: string;
-            memberId: string | null;
-            /** @example LG101 */
-            code: string;
-            /** @example overstated-net-area */
-            name: string;
-            /** @enum {string} */
-            class: "overstated" | "understated" | "missed-chain" | "phantom-chain" | "chain-width" | "equal-share" | "detailing" | "input";
-            /** @enum {string} */
-            severity: "error" | "warning" | "note";
-            /** @enum {string|null} */
-            direction: "-x" | "+x" | null;
-            /** @description Hole ids of the chain or holes concerned */
-            chain: string[];
-            claimed: number | null;
-            recomputed: number | null;
-            message: string;
-            /** @description JSON pointer into the calc file */
-            pointer: string;
-            /** @enum {string} */
-            status: "raised" | "answered" | "accepted" | "returned" | "waived";
-            /** Format: date-time */
-            acknowledgedAt: string | null;
-            /** Format: date-time */
-            createdAt: string;
-            /** Format: date-time */
-            updatedAt: string;
-            raisedBy: string;
-            submittalTitle: string;
-            /** @description Every move, comment and acknowledgement, oldest first */
-            history: components["schemas"]["EventDto"][];
-            comments: components["schemas"]["CommentViewDto"][];
-            /** @description Statuses the caller may move it to now */
-            allowedMoves: ("raised" | "answered" | "accepted" | "returned" | "waived")[];
-            /** @description Whether the caller may acknowledge it (owner’s rep, not yet acknowledged) */
-            canAcknowledge: boolean;
-        };
-        TransitionDto: {
-            /** @enum {string} */
-            to: "answered" | "accepted" | "returned" | "waived";
-            /** @description answered: a note or a revision; returned and waived: the reason */
-            note?: string;
-            /** @description answered: the submittal that revises this discrepancy’s submittal */
-            revisionSubmittalId?: number;
-        };
-        CreateCommentDto: {
-            body: string;
-        };
-        DashboardProjectDto: {
-            id: number;
-            name: string;
-            open: number;
-            openErrors: number;
-            submittals: number;
-        };
-        AgeBucketsDto: {
-            /** @description 0–7 days */
-            week: number;
-            /** @description 8–30 days */
-            month: number;
-            /** @description 31–90 days */
-            quarter: number;
-            /** @description over 90 days */
-            older: number;
-        };
-        TrendPointDto: {
-            submittalId: number;
-            projectId: number;
-            title: string;
-            /** Format: date-time */
-            date: string;
-            /** @description Findings raised by this submittal */
-            raised: number;
-            /** @description Of those, still open now */
-            open: number;
-            bySeverity: components["schemas"]["CountsBySeverityDto"];
-        };
-        DashboardDto: {
-            projects: components["schemas"]["DashboardProjectDto"][];
-            openTotal: number;
-            openByClass: components["schemas"]["CountsByClassDto"];
-            openBySeverity: components["schemas"]["CountsBySeverityDto"];
-            openByAge: components["schemas"]["AgeBucketsDto"];
-            /** @description One point per submittal, by submittal date */
-            trend: components["schemas"]["TrendPointDto"][];
-            /** Format: date-time */
-            generatedAt: string;
-        };
-        DatabaseHealthDto: {
-            /** @description Readable and writable */
-            ok: boolean;
-            /** @description The last write (a request’s or the heartbeat’s) committed */
-            writable: boolean;
-            error?: string;
-        };
-        MailHealthDto: {
-            /** @description Fake running (if used) and no message failing */
-            ok: boolean;
-            /** @example smtp://127.0.0.1:2525 */
-            transport: string;
-            fake: boolean;
-            fakeRunning: boolean;
-            pending: number;
-            oldestPendingAt: string | null;
-            lastError: string | null;
-        };
-        HealthDto: {
-            /** @enum {string} */
-            status: "ok" | "degraded" | "down";
-            engineVersion: string;
-            database: components["schemas"]["DatabaseHealthDto"];
-            mail: components["schemas"]["MailHealthDto"];
-            /** @description Demo mode: seeded data, demo mailbox (admin), demo sign-ins */
-            demo: boolean;
-            /** @description Unsafe settings, e.g. the public demo JWT secret */
-            warnings: string[];
-        };
+  schemas: {
+    LoginDto: {
+      /** @example priya@fennick-ode.example.test */
+      email: string;
+      /** @example lantern-demo-2026 */
+      password: string;
     };
-    responses: never;
-    parameters: never;
-    requestBodies: never;
-    headers: never;
-    pathItems: never;
+    /** @enum {string} */
+    Role: 'admin' | 'consultant' | 'checker' | 'owner-rep';
+    UserOrganisationDto: {
+      id: number;
+      name: string;
+    };
+    UserDto: {
+      id: number;
+      email: string;
+      name: string;
+      role: components['schemas']['Role'];
+      organisationId: number | null;
+      organisation: components['schemas']['UserOrganisationDto'] | null;
+      active: boolean;
+    };
+    LoginResponseDto: {
+      /** @description Send as `Authorization: Bearer <accessToken>` */
+      accessToken: string;
+      /** @example 8h */
+      expiresIn: string;
+      user: components['schemas']['UserDto'];
+    };
+    ErrorBody: {
+      /** @example 422 */
+      statusCode: number;
+      /** @example Unprocessable Entity */
+      error: string;
+      /** @example 2 of 10 files are invalid; nothing was stored. */
+      message: string;
+      /** @description Itemised problems: CalcError[] for 422 uploads, {property, constraints} for 400 validation. */
+      details?: {
+        [key: string]: unknown;
+      }[];
+    };
+    MeDto: {
+      id: number;
+      email: string;
+      name: string;
+      role: components['schemas']['Role'];
+      organisationId: number | null;
+      organisation: components['schemas']['UserOrganisationDto'] | null;
+      active: boolean;
+      /**
+       * @description How this call was authenticated
+       * @enum {string}
+       */
+      via: 'password' | 'api-token';
+      /** @description For API tokens: the one project it may use */
+      tokenProjectId: number | null;
+    };
+    UpdateUserDto: {
+      role?: components['schemas']['Role'];
+      active?: boolean;
+      name?: string;
+      organisationId?: number;
+    };
+    InvitationDto: {
+      id: number;
+      email: string;
+      name: string;
+      role: components['schemas']['Role'];
+      organisationId: number | null;
+      /** Format: date-time */
+      expiresAt: string;
+      /** Format: date-time */
+      acceptedAt: string | null;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    CreateInvitationDto: {
+      /** @example new.engineer@fennick-ode.example.test */
+      email: string;
+      /** @example Noor Castellan */
+      name: string;
+      role: components['schemas']['Role'];
+      organisationId?: number;
+    };
+    InvitationPreviewDto: {
+      email: string;
+      name: string;
+      role: components['schemas']['Role'];
+      organisation: string | null;
+      /** Format: date-time */
+      expiresAt: string;
+    };
+    AcceptInvitationDto: {
+      password: string;
+      /** @description Change the name the admin typed */
+      name?: string;
+    };
+    AcceptedDto: {
+      id: number;
+      email: string;
+    };
+    MailboxMessageDto: {
+      id: number;
+      from: string;
+      to: string;
+      subject: string;
+      text: string;
+      /** Format: date-time */
+      receivedAt: string;
+    };
+    OutboxMessageDto: {
+      id: number;
+      /** @enum {string} */
+      kind: 'invitation' | 'submittal-checked' | 'discrepancy-answered' | 'submittal-stamped';
+      to: string;
+      subject: string;
+      /** @enum {string} */
+      status: 'pending' | 'sent';
+      attempts: number;
+      lastError: string | null;
+      /** Format: date-time */
+      nextAttemptAt: string;
+      /** Format: date-time */
+      sentAt: string | null;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    FlushResultDto: {
+      sent: number;
+      failed: number;
+    };
+    EventActorDto: {
+      id: number;
+      name: string;
+      role: string;
+    };
+    EventDto: {
+      id: number;
+      /** @example discrepancy.answered */
+      type: string;
+      /** Format: date-time */
+      at: string;
+      actor: components['schemas']['EventActorDto'] | null;
+      projectId: number | null;
+      submittalId: number | null;
+      discrepancyId: number | null;
+      data: {
+        [key: string]: unknown;
+      };
+    };
+    EventPageDto: {
+      items: components['schemas']['EventDto'][];
+      total: number;
+      page: number;
+      pageSize: number;
+    };
+    TokenDto: {
+      id: number;
+      name: string;
+      projectId: number;
+      /**
+       * @description First characters, to tell tokens apart
+       * @example lgt_3kq9
+       */
+      prefix: string;
+      /** Format: date-time */
+      createdAt: string;
+      /** Format: date-time */
+      lastUsedAt: string | null;
+      /** Format: date-time */
+      revokedAt: string | null;
+    };
+    CreateTokenDto: {
+      /** @example CI — harbour-lantern repo */
+      name: string;
+      /** @description The one project this token may upload to and read */
+      projectId: number;
+    };
+    CreatedTokenDto: {
+      id: number;
+      name: string;
+      projectId: number;
+      /**
+       * @description First characters, to tell tokens apart
+       * @example lgt_3kq9
+       */
+      prefix: string;
+      /** Format: date-time */
+      createdAt: string;
+      /** Format: date-time */
+      lastUsedAt: string | null;
+      /** Format: date-time */
+      revokedAt: string | null;
+      /** @description The token itself. Shown this once; only its sha256 is stored. */
+      token: string;
+    };
+    OrganisationDto: {
+      id: number;
+      name: string;
+      /** @enum {string} */
+      kind: 'consultant' | 'checker' | 'owner' | 'operator';
+    };
+    CreateOrganisationDto: {
+      /** @example Fennick & Ode Structural */
+      name: string;
+      /** @enum {string} */
+      kind: 'consultant' | 'checker' | 'owner' | 'operator';
+    };
+    ProjectOwnerDto: {
+      id: number;
+      name: string;
+    };
+    ProjectDto: {
+      id: number;
+      name: string;
+      reference: string | null;
+      description: string | null;
+      ownerOrganisation: components['schemas']['ProjectOwnerDto'] | null;
+      submittalCount: number;
+      /** @description Discrepancies in raised, answered or returned */
+      openDiscrepancyCount: number;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    CreateProjectDto: {
+      /** @example Harbour Lantern Footbridge */
+      name: string;
+      /** @example HLF-2026 */
+      reference?: string;
+      description?: string;
+      ownerOrganisationId?: number;
+    };
+    UpdateProjectDto: {
+      /** @example Harbour Lantern Footbridge */
+      name?: string;
+      /** @example HLF-2026 */
+      reference?: string;
+      description?: string;
+      ownerOrganisationId?: number;
+    };
+    ProjectMemberDto: {
+      id: number;
+      email: string;
+      name: string;
+      role: components['schemas']['Role'];
+      organisationId: number | null;
+      organisation: components['schemas']['UserOrganisationDto'] | null;
+      active: boolean;
+      /** Format: date-time */
+      memberSince: string;
+    };
+    AddMemberDto: {
+      userId: number;
+    };
+    CountsByClassDto: {
+      overstated: number;
+      understated: number;
+      'missed-chain': number;
+      'phantom-chain': number;
+      'chain-width': number;
+      'equal-share': number;
+      detailing: number;
+      input: number;
+    };
+    CountsBySeverityDto: {
+      error: number;
+      warning: number;
+      note: number;
+    };
+    WorstFindingDto: {
+      /** @example LG101 */
+      code: string;
+      name: string;
+      /** @enum {string} */
+      class:
+        | 'overstated'
+        | 'understated'
+        | 'missed-chain'
+        | 'phantom-chain'
+        | 'chain-width'
+        | 'equal-share'
+        | 'detailing'
+        | 'input';
+      /** @enum {string} */
+      severity: 'error' | 'warning' | 'note';
+      fileName: string;
+      memberId: string | null;
+      message: string;
+    };
+    SummaryDto: {
+      files: number;
+      members: number;
+      findings: number;
+      byClass: components['schemas']['CountsByClassDto'];
+      bySeverity: components['schemas']['CountsBySeverityDto'];
+      worst: components['schemas']['WorstFindingDto'] | null;
+    };
+    StampDto: {
+      /** @enum {string} */
+      action: 'no-exceptions-taken' | 'make-corrections-noted' | 'revise-and-resubmit' | 'rejected';
+      comment: string;
+      overrideReason: string | null;
+      stampedBy: string;
+      /** Format: date-time */
+      stampedAt: string;
+    };
+    SubmittalDto: {
+      id: number;
+      projectId: number;
+      title: string;
+      revisionOfId: number | null;
+      /** @description Submittals that revise this one */
+      revisedBy: number[];
+      submittedBy: string;
+      viaApiToken: boolean;
+      engineVersion: string;
+      /** @enum {string} */
+      status: 'checked' | 'stamped';
+      summary: components['schemas']['SummaryDto'];
+      /** @description Discrepancies still raised, answered or returned */
+      openDiscrepancies: number;
+      stamp: components['schemas']['StampDto'] | null;
+      /** @example /submittals/12 */
+      webPath: string;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    UploadSubmittalBodyDto: {
+      /** @example Splice plates, level 2 deck */
+      title: string;
+      /** @description Id of the submittal this one revises (same project) */
+      revisionOf?: number;
+      /** @description Calc files (.json) */
+      files: string[];
+    };
+    UploadResultDto: {
+      submittalId: number;
+      projectId: number;
+      title: string;
+      revisionOfId: number | null;
+      engineVersion: string;
+      summary: components['schemas']['SummaryDto'];
+      /** @example /submittals/12 */
+      webPath: string;
+      /** @example http://localhost:3000/submittals/12 */
+      webUrl: string;
+    };
+    FileDiffDto: {
+      /** @enum {string} */
+      change: 'changed' | 'unchanged' | 'added' | 'removed';
+      previousFile: string | null;
+      currentFile: string | null;
+      /**
+       * @description How the two files were paired
+       * @enum {string}
+       */
+      matchedBy: 'file-name' | 'member-ids' | 'none';
+      /** @description Unified diff (diff package) of the canonical JSON (sorted keys, 2 spaces); "" when unchanged */
+      patch: string;
+    };
+    DiffDiscrepancyDto: {
+      id: number;
+      code: string;
+      memberId: string | null;
+      chain: string | null;
+      severity: string;
+      status: string;
+      message: string;
+    };
+    KeptDiscrepancyDto: {
+      previous: components['schemas']['DiffDiscrepancyDto'];
+      current: components['schemas']['DiffDiscrepancyDto'];
+    };
+    RevisionDiffDto: {
+      submittalId: number;
+      previousSubmittalId: number;
+      files: components['schemas']['FileDiffDto'][];
+      /** @description In the previous submittal, gone from this one */
+      closed: components['schemas']['DiffDiscrepancyDto'][];
+      /** @description In both (same code, member and chain) */
+      kept: components['schemas']['KeptDiscrepancyDto'][];
+      /** @description New in this one */
+      opened: components['schemas']['DiffDiscrepancyDto'][];
+    };
+    RecheckValueChangeDto: {
+      fileName: string;
+      memberId: string;
+      /** @example An */
+      field: string;
+      stored: number | null;
+      current: number | null;
+    };
+    RecheckFindingDto: {
+      fileName: string;
+      code: string;
+      memberId: string | null;
+      chain: string | null;
+      severity: string;
+      message: string;
+    };
+    RecheckDto: {
+      submittalId: number;
+      storedEngineVersion: string;
+      currentEngineVersion: string;
+      /** @description True when anything below differs */
+      changed: boolean;
+      valueChanges: components['schemas']['RecheckValueChangeDto'][];
+      newFindings: components['schemas']['RecheckFindingDto'][];
+      goneFindings: components['schemas']['RecheckFindingDto'][];
+      unchangedFindings: number;
+      /** @description CalcErrors if a stored file no longer loads */
+      loadErrors: {
+        [key: string]: unknown;
+      }[];
+    };
+    StampSubmittalDto: {
+      /** @enum {string} */
+      action: 'no-exceptions-taken' | 'make-corrections-noted' | 'revise-and-resubmit' | 'rejected';
+      comment: string;
+      /** @description Required to stamp while error-severity discrepancies are open */
+      overrideReason?: string;
+    };
+    CalcFileDto: {
+      id: number;
+      submittalId: number;
+      fileName: string;
+      size: number;
+      /** @description sha256 (hex) of the original bytes */
+      sha256: string;
+      memberIds: string[];
+      /** Format: date-time */
+      createdAt: string;
+    };
+    CalcFileDetailDto: {
+      id: number;
+      submittalId: number;
+      fileName: string;
+      size: number;
+      /** @description sha256 (hex) of the original bytes */
+      sha256: string;
+      memberIds: string[];
+      /** Format: date-time */
+      createdAt: string;
+      /** @description The normalised CalcDocument (ligament package types) */
+      document: {
+        [key: string]: unknown;
+      };
+    };
+    CodeProfileDto: {
+      /** @example AISC 360-22 */
+      standard: string;
+      /** @enum {string} */
+      method: 'LRFD' | 'ASD';
+      /** @enum {string} */
+      units: 'in' | 'mm';
+    };
+    ChainSummaryDto: {
+      holes: string[];
+      netWidth: number;
+      netArea: number;
+    };
+    DirectionResultDto: {
+      /** @enum {string} */
+      direction: '-x' | '+x';
+      governing: components['schemas']['ChainSummaryDto'] | null;
+      leastChains: components['schemas']['ChainSummaryDto'][];
+      An: number;
+    };
+    MemberResultDto: {
+      id: number;
+      submittalId: number;
+      calcFileId: number;
+      fileName: string;
+      memberId: string;
+      engineVersion: string;
+      profile: components['schemas']['CodeProfileDto'];
+      /** @description sha256 of the canonical member input and profile */
+      inputsHash: string;
+      Ag: number;
+      An: number;
+      Ae: number;
+      U: number;
+      /** @description Available yielding strength */
+      yielding: number;
+      /** @description Available rupture strength */
+      rupture: number;
+      /** @description Governing available strength */
+      available: number;
+      governingDirection: string;
+      directions: components['schemas']['DirectionResultDto'][];
+      /** @description The engine MemberResult (ligament package types) */
+      result: {
+        [key: string]: unknown;
+      };
+    };
+    DiscrepancyDto: {
+      id: number;
+      projectId: number;
+      submittalId: number;
+      calcFileId: number;
+      fileName: string;
+      memberId: string | null;
+      /** @example LG101 */
+      code: string;
+      /** @example overstated-net-area */
+      name: string;
+      /** @enum {string} */
+      class:
+        | 'overstated'
+        | 'understated'
+        | 'missed-chain'
+        | 'phantom-chain'
+        | 'chain-width'
+        | 'equal-share'
+        | 'detailing'
+        | 'input';
+      /** @enum {string} */
+      severity: 'error' | 'warning' | 'note';
+      /** @enum {string|null} */
+      direction: '-x' | '+x' | null;
+      /** @description Hole ids of the chain or holes concerned */
+      chain: string[];
+      claimed: number | null;
+      recomputed: number | null;
+      message: string;
+      /** @description JSON pointer into the calc file */
+      pointer: string;
+      /** @enum {string} */
+      status: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived';
+      /** Format: date-time */
+      acknowledgedAt: string | null;
+      /** Format: date-time */
+      createdAt: string;
+      /** Format: date-time */
+      updatedAt: string;
+    };
+    DiscrepancyPageDto: {
+      items: components['schemas']['DiscrepancyDto'][];
+      total: number;
+      page: number;
+      pageSize: number;
+    };
+    BulkTransitionDto: {
+      ids: number[];
+      /** @enum {string} */
+      to: 'accepted' | 'returned' | 'waived';
+      note?: string;
+    };
+    BulkResultDto: {
+      moved: number;
+      items: components['schemas']['DiscrepancyDto'][];
+    };
+    CommentViewDto: {
+      id: number;
+      body: string;
+      author: string;
+      authorRole: string;
+      /** Format: date-time */
+      at: string;
+    };
+    DiscrepancyDetailDto: {
+      id: number;
+      projectId: number;
+      submittalId: number;
+      calcFileId: number;
+      fileName: string;
+      memberId: string | null;
+      /** @example LG101 */
+      code: string;
+      /** @example overstated-net-area */
+      name: string;
+      /** @enum {string} */
+      class:
+        | 'overstated'
+        | 'understated'
+        | 'missed-chain'
+        | 'phantom-chain'
+        | 'chain-width'
+        | 'equal-share'
+        | 'detailing'
+        | 'input';
+      /** @enum {string} */
+      severity: 'error' | 'warning' | 'note';
+      /** @enum {string|null} */
+      direction: '-x' | '+x' | null;
+      /** @description Hole ids of the chain or holes concerned */
+      chain: string[];
+      claimed: number | null;
+      recomputed: number | null;
+      message: string;
+      /** @description JSON pointer into the calc file */
+      pointer: string;
+      /** @enum {string} */
+      status: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived';
+      /** Format: date-time */
+      acknowledgedAt: string | null;
+      /** Format: date-time */
+      createdAt: string;
+      /** Format: date-time */
+      updatedAt: string;
+      raisedBy: string;
+      submittalTitle: string;
+      /** @description Every move, comment and acknowledgement, oldest first */
+      history: components['schemas']['EventDto'][];
+      comments: components['schemas']['CommentViewDto'][];
+      /** @description Statuses the caller may move it to now */
+      allowedMoves: ('raised' | 'answered' | 'accepted' | 'returned' | 'waived')[];
+      /** @description Whether the caller may acknowledge it (owner’s rep, not yet acknowledged) */
+      canAcknowledge: boolean;
+    };
+    TransitionDto: {
+      /** @enum {string} */
+      to: 'answered' | 'accepted' | 'returned' | 'waived';
+      /** @description answered: a note or a revision; returned and waived: the reason */
+      note?: string;
+      /** @description answered: the submittal that revises this discrepancy’s submittal */
+      revisionSubmittalId?: number;
+    };
+    CreateCommentDto: {
+      body: string;
+    };
+    DashboardProjectDto: {
+      id: number;
+      name: string;
+      open: number;
+      openErrors: number;
+      submittals: number;
+    };
+    AgeBucketsDto: {
+      /** @description 0–7 days */
+      week: number;
+      /** @description 8–30 days */
+      month: number;
+      /** @description 31–90 days */
+      quarter: number;
+      /** @description over 90 days */
+      older: number;
+    };
+    TrendPointDto: {
+      submittalId: number;
+      projectId: number;
+      title: string;
+      /** Format: date-time */
+      date: string;
+      /** @description Findings raised by this submittal */
+      raised: number;
+      /** @description Of those, still open now */
+      open: number;
+      bySeverity: components['schemas']['CountsBySeverityDto'];
+    };
+    DashboardDto: {
+      projects: components['schemas']['DashboardProjectDto'][];
+      openTotal: number;
+      openByClass: components['schemas']['CountsByClassDto'];
+      openBySeverity: components['schemas']['CountsBySeverityDto'];
+      openByAge: components['schemas']['AgeBucketsDto'];
+      /** @description One point per submittal, by submittal date */
+      trend: components['schemas']['TrendPointDto'][];
+      /** Format: date-time */
+      generatedAt: string;
+    };
+    DatabaseHealthDto: {
+      /** @description Readable and writable */
+      ok: boolean;
+      /** @description The last write (a request’s or the heartbeat’s) committed */
+      writable: boolean;
+      error?: string;
+    };
+    MailHealthDto: {
+      /** @description Fake running (if used) and no message failing */
+      ok: boolean;
+      /** @example smtp://127.0.0.1:2525 */
+      transport: string;
+      fake: boolean;
+      fakeRunning: boolean;
+      pending: number;
+      oldestPendingAt: string | null;
+      lastError: string | null;
+    };
+    HealthDto: {
+      /** @enum {string} */
+      status: 'ok' | 'degraded' | 'down';
+      engineVersion: string;
+      database: components['schemas']['DatabaseHealthDto'];
+      mail: components['schemas']['MailHealthDto'];
+      /** @description Demo mode: seeded data, demo mailbox (admin), demo sign-ins */
+      demo: boolean;
+      /** @description Unsafe settings, e.g. the public demo JWT secret */
+      warnings: string[];
+    };
+  };
+  responses: never;
+  parameters: never;
+  requestBodies: never;
+  headers: never;
+  pathItems: never;
 }
 export type $defs = Record<string, never>;
 export interface operations {
-    AuthController_login: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["LoginDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["LoginResponseDto"];
-                };
-            };
-            /** @description Too many failed sign-ins for the account or from the address; `Retry-After` gives the seconds */
-            429: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ErrorBody"];
-                };
-            };
-        };
+  AuthController_login: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    AuthController_me: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["MeDto"];
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['LoginDto'];
+      };
     };
-    UsersController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["UserDto"][];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['LoginResponseDto'];
         };
+      };
+      /** @description Too many failed sign-ins for the account or from the address; `Retry-After` gives the seconds */
+      429: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
+        };
+      };
     };
-    UsersController_update: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                userId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["UpdateUserDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["UserDto"];
-                };
-            };
-        };
+  };
+  AuthController_me: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    InvitationsController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["InvitationDto"][];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['MeDto'];
         };
+      };
     };
-    InvitationsController_create: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["CreateInvitationDto"];
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["InvitationDto"];
-                };
-            };
-        };
+  };
+  UsersController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    InvitationsController_preview: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                token: string;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["InvitationPreviewDto"];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['UserDto'][];
         };
+      };
     };
-    InvitationsController_accept: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                token: string;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["AcceptInvitationDto"];
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["AcceptedDto"];
-                };
-            };
-        };
+  };
+  UsersController_update: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        userId: number;
+      };
+      cookie?: never;
     };
-    MailController_listMailbox: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["MailboxMessageDto"][];
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateUserDto'];
+      };
     };
-    MailController_listOutbox: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["OutboxMessageDto"][];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['UserDto'];
         };
+      };
     };
-    MailController_flush: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["FlushResultDto"];
-                };
-            };
-        };
+  };
+  InvitationsController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    EventsController_list: {
-        parameters: {
-            query?: {
-                page?: number;
-                pageSize?: number;
-            };
-            header?: never;
-            path: {
-                projectId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["EventPageDto"];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['InvitationDto'][];
         };
+      };
     };
-    TokensController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["TokenDto"][];
-                };
-            };
-        };
+  };
+  InvitationsController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    TokensController_create: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["CreateTokenDto"];
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["CreatedTokenDto"];
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateInvitationDto'];
+      };
     };
-    TokensController_revoke: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                tokenId: number;
-            };
-            cookie?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["TokenDto"];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['InvitationDto'];
         };
+      };
     };
-    OrganisationsController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["OrganisationDto"][];
-                };
-            };
-        };
+  };
+  InvitationsController_preview: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        token: string;
+      };
+      cookie?: never;
     };
-    OrganisationsController_create: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["CreateOrganisationDto"];
-            };
+        content: {
+          'application/json': components['schemas']['InvitationPreviewDto'];
         };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["OrganisationDto"];
-                };
-            };
-        };
+      };
     };
-    ProjectsController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ProjectDto"][];
-                };
-            };
-        };
+  };
+  InvitationsController_accept: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        token: string;
+      };
+      cookie?: never;
     };
-    ProjectsController_create: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["CreateProjectDto"];
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ProjectDto"];
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['AcceptInvitationDto'];
+      };
     };
-    ProjectsController_get: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                projectId: number;
-            };
-            cookie?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ProjectDto"];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['AcceptedDto'];
         };
+      };
     };
-    ProjectsController_update: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                projectId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["UpdateProjectDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ProjectDto"];
-                };
-            };
-        };
+  };
+  MailController_listMailbox: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    ProjectsController_members: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                projectId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ProjectMemberDto"][];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['MailboxMessageDto'][];
         };
+      };
     };
-    ProjectsController_addMember: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                projectId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["AddMemberDto"];
-            };
-        };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ProjectMemberDto"][];
-                };
-            };
-        };
+  };
+  MailController_listOutbox: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    ProjectsController_removeMember: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                projectId: number;
-                userId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ProjectMemberDto"][];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['OutboxMessageDto'][];
         };
+      };
     };
-    SubmittalsController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                projectId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["SubmittalDto"][];
-                };
-            };
-        };
+  };
+  MailController_flush: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    SubmittalsController_upload: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                projectId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "multipart/form-data": components["schemas"]["UploadSubmittalBodyDto"];
-            };
+        content: {
+          'application/json': components['schemas']['FlushResultDto'];
         };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["UploadResultDto"];
-                };
-            };
-            /** @description A file or the total is over the configured limit */
-            413: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ErrorBody"];
-                };
-            };
-            /** @description details: CalcError[] {file, pointer, line, column, rule, message} */
-            422: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["ErrorBody"];
-                };
-            };
-        };
+      };
     };
-    SubmittalsController_get: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                submittalId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["SubmittalDto"];
-                };
-            };
-        };
+  };
+  EventsController_list: {
+    parameters: {
+      query?: {
+        page?: number;
+        pageSize?: number;
+      };
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
     };
-    SubmittalsController_diff: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                submittalId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["RevisionDiffDto"];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['EventPageDto'];
         };
+      };
     };
-    SubmittalsController_recheck: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                submittalId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["RecheckDto"];
-                };
-            };
-        };
+  };
+  TokensController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    SubmittalsController_stamp: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                submittalId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["StampSubmittalDto"];
-            };
+        content: {
+          'application/json': components['schemas']['TokenDto'][];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["SubmittalDto"];
-                };
-            };
-        };
+      };
     };
-    SubmittalsController_listEvents: {
-        parameters: {
-            query?: {
-                page?: number;
-                pageSize?: number;
-            };
-            header?: never;
-            path: {
-                submittalId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["EventPageDto"];
-                };
-            };
-        };
+  };
+  TokensController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    CalcFilesController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                submittalId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["CalcFileDto"][];
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateTokenDto'];
+      };
     };
-    CalcFilesController_get: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                fileId: number;
-            };
-            cookie?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["CalcFileDetailDto"];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['CreatedTokenDto'];
         };
+      };
     };
-    CalcFilesController_content: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                fileId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content?: never;
-            };
-        };
+  };
+  TokensController_revoke: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        tokenId: number;
+      };
+      cookie?: never;
     };
-    ResultsController_list: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                submittalId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["MemberResultDto"][];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['TokenDto'];
         };
+      };
     };
-    DiscrepanciesController_list: {
-        parameters: {
-            query?: {
-                page?: number;
-                pageSize?: number;
-                submittalId?: number;
-                /** @description Comma-separated: overstated, understated, missed-chain, phantom-chain, chain-width, equal-share, detailing, input */
-                class?: string[];
-                /** @description Comma-separated: error, warning, note */
-                severity?: string[];
-                /** @description Comma-separated: raised, answered, accepted, returned, waived, or "open" */
-                status?: string[];
-                memberId?: string;
-                code?: string;
-                sort?: "id" | "createdAt" | "updatedAt" | "severity" | "class" | "status" | "memberId" | "code" | "fileName";
-                order?: "asc" | "desc";
-            };
-            header?: never;
-            path: {
-                projectId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["DiscrepancyPageDto"];
-                };
-            };
-        };
+  };
+  OrganisationsController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    DiscrepanciesController_bulk: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                projectId: number;
-            };
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["BulkTransitionDto"];
-            };
+        content: {
+          'application/json': components['schemas']['OrganisationDto'][];
         };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["BulkResultDto"];
-                };
-            };
-        };
+      };
     };
-    DiscrepanciesController_get: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                discrepancyId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["DiscrepancyDetailDto"];
-                };
-            };
-        };
+  };
+  OrganisationsController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    DiscrepanciesController_move: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                discrepancyId: number;
-            };
-            cookie?: never;
-        };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["TransitionDto"];
-            };
-        };
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["DiscrepancyDetailDto"];
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateOrganisationDto'];
+      };
     };
-    DiscrepanciesController_comment: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                discrepancyId: number;
-            };
-            cookie?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody: {
-            content: {
-                "application/json": components["schemas"]["CreateCommentDto"];
-            };
+        content: {
+          'application/json': components['schemas']['OrganisationDto'];
         };
-        responses: {
-            201: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["CommentViewDto"];
-                };
-            };
-        };
+      };
     };
-    DiscrepanciesController_acknowledge: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                discrepancyId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["DiscrepancyDetailDto"];
-                };
-            };
-        };
+  };
+  ProjectsController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    ReportsController_dashboard: {
-        parameters: {
-            query?: {
-                /** @description Only this project (must be one of yours) */
-                projectId?: number;
-            };
-            header?: never;
-            path?: never;
-            cookie?: never;
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["DashboardDto"];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['ProjectDto'][];
         };
+      };
     };
-    ReportsController_csv: {
-        parameters: {
-            query?: {
-                /** @description Only this project (must be one of yours) */
-                projectId?: number;
-            };
-            header?: never;
-            path?: never;
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "text/csv": string;
-                };
-            };
-        };
+  };
+  ProjectsController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
     };
-    ReportsController_report: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path: {
-                submittalId: number;
-            };
-            cookie?: never;
-        };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "text/html": string;
-                };
-            };
-        };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateProjectDto'];
+      };
     };
-    HealthController_health: {
-        parameters: {
-            query?: never;
-            header?: never;
-            path?: never;
-            cookie?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
         };
-        requestBody?: never;
-        responses: {
-            200: {
-                headers: {
-                    [name: string]: unknown;
-                };
-                content: {
-                    "application/json": components["schemas"]["HealthDto"];
-                };
-            };
+        content: {
+          'application/json': components['schemas']['ProjectDto'];
         };
+      };
     };
+  };
+  ProjectsController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ProjectDto'];
+        };
+      };
+    };
+  };
+  ProjectsController_update: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateProjectDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ProjectDto'];
+        };
+      };
+    };
+  };
+  ProjectsController_members: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ProjectMemberDto'][];
+        };
+      };
+    };
+  };
+  ProjectsController_addMember: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['AddMemberDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ProjectMemberDto'][];
+        };
+      };
+    };
+  };
+  ProjectsController_removeMember: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        projectId: number;
+        userId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ProjectMemberDto'][];
+        };
+      };
+    };
+  };
+  SubmittalsController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['SubmittalDto'][];
+        };
+      };
+    };
+  };
+  SubmittalsController_upload: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'multipart/form-data': components['schemas']['UploadSubmittalBodyDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['UploadResultDto'];
+        };
+      };
+      /** @description A file or the total is over the configured limit */
+      413: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
+        };
+      };
+      /** @description details: CalcError[] {file, pointer, line, column, rule, message} */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
+        };
+      };
+    };
+  };
+  SubmittalsController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        submittalId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['SubmittalDto'];
+        };
+      };
+    };
+  };
+  SubmittalsController_diff: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        submittalId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['RevisionDiffDto'];
+        };
+      };
+    };
+  };
+  SubmittalsController_recheck: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        submittalId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['RecheckDto'];
+        };
+      };
+    };
+  };
+  SubmittalsController_stamp: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        submittalId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['StampSubmittalDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['SubmittalDto'];
+        };
+      };
+    };
+  };
+  SubmittalsController_listEvents: {
+    parameters: {
+      query?: {
+        page?: number;
+        pageSize?: number;
+      };
+      header?: never;
+      path: {
+        submittalId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['EventPageDto'];
+        };
+      };
+    };
+  };
+  CalcFilesController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        submittalId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['CalcFileDto'][];
+        };
+      };
+    };
+  };
+  CalcFilesController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        fileId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['CalcFileDetailDto'];
+        };
+      };
+    };
+  };
+  CalcFilesController_content: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        fileId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  ResultsController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        submittalId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['MemberResultDto'][];
+        };
+      };
+    };
+  };
+  DiscrepanciesController_list: {
+    parameters: {
+      query?: {
+        page?: number;
+        pageSize?: number;
+        submittalId?: number;
+        /** @description Comma-separated: overstated, understated, missed-chain, phantom-chain, chain-width, equal-share, detailing, input */
+        class?: string[];
+        /** @description Comma-separated: error, warning, note */
+        severity?: string[];
+        /** @description Comma-separated: raised, answered, accepted, returned, waived, or "open" */
+        status?: string[];
+        memberId?: string;
+        code?: string;
+        sort?:
+          | 'id'
+          | 'createdAt'
+          | 'updatedAt'
+          | 'severity'
+          | 'class'
+          | 'status'
+          | 'memberId'
+          | 'code'
+          | 'fileName';
+        order?: 'asc' | 'desc';
+      };
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['DiscrepancyPageDto'];
+        };
+      };
+    };
+  };
+  DiscrepanciesController_bulk: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['BulkTransitionDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BulkResultDto'];
+        };
+      };
+    };
+  };
+  DiscrepanciesController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        discrepancyId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['DiscrepancyDetailDto'];
+        };
+      };
+    };
+  };
+  DiscrepanciesController_move: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        discrepancyId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['TransitionDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['DiscrepancyDetailDto'];
+        };
+      };
+    };
+  };
+  DiscrepanciesController_comment: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        discrepancyId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateCommentDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['CommentViewDto'];
+        };
+      };
+    };
+  };
+  DiscrepanciesController_acknowledge: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        discrepancyId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['DiscrepancyDetailDto'];
+        };
+      };
+    };
+  };
+  ReportsController_dashboard: {
+    parameters: {
+      query?: {
+        /** @description Only this project (must be one of yours) */
+        projectId?: number;
+      };
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['DashboardDto'];
+        };
+      };
+    };
+  };
+  ReportsController_csv: {
+    parameters: {
+      query?: {
+        /** @description Only this project (must be one of yours) */
+        projectId?: number;
+      };
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'text/csv': string;
+        };
+      };
+    };
+  };
+  ReportsController_report: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        submittalId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'text/html': string;
+        };
+      };
+    };
+  };
+  HealthController_health: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['HealthDto'];
+        };
+      };
+    };
+  };
 }
