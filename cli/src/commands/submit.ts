@@ -193,11 +193,13 @@ export function submitCommand(ctx: CliContext): Command {
     .addOption(
       new Option('-f, --format <format>', 'summary format').choices(['text', 'json']).default('text'),
     )
-    .option(
-      '--timeout <duration>',
-      'give up (exit 2) when the service has not answered in full within this time: 60s, 500ms, 2m',
-      durationArg,
-      durationArg(DEFAULT_SUBMIT_TIMEOUT),
+    .addOption(
+      new Option(
+        '--timeout <duration>',
+        'give up (exit 2) when the service has not answered in full within this time: 60s, 500ms, 2m',
+      )
+        .argParser(durationArg)
+        .default(durationArg(DEFAULT_SUBMIT_TIMEOUT), DEFAULT_SUBMIT_TIMEOUT),
     )
     .addHelpText(
       'after',
