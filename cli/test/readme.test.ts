@@ -182,6 +182,8 @@ describe('the commands in README.md and cli/README.md', () => {
       const ran: string[] = [];
       for (const { readme, command } of ordered) {
         if (command in NOT_RUN || command === PACK) continue;
+        // A command both READMEs show (the install, the SARIF step) is run once.
+        if (ran.includes(command)) continue;
         const inClone = command.includes('schema/examples/');
         const cwd = inClone ? clone.path : calcRepo.path;
         const written = command.replace('https://review.example.test', serverUrl);
@@ -195,7 +197,7 @@ describe('the commands in README.md and cli/README.md', () => {
           expect(statSync(join(cwd, output)).size, `${command} writes ${output}`).toBeGreaterThan(0);
         ran.push(command);
       }
-      expect(ran.length).toBeGreaterThanOrEqual(10);
+      expect(ran.length).toBeGreaterThanOrEqual(9);
       // The global install put the command where a CI runner finds it; the project install for npx.
       expect(existsSync(join(prefix, 'bin', 'ligament'))).toBe(true);
       expect(readdirSync(join(calcRepo.path, 'node_modules'))).toContain('ligament');
