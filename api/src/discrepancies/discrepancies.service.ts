@@ -196,14 +196,25 @@ export class DiscrepanciesService {
     };
   }
 
-  /** One status move. 403 wrong role, 409 not from this status, 400 missing note, 422 bad revision link. */
+  /**
+   * One status move. 403 wrong role, 409 not from this status, 400 missing note, 422 bad revision
+   * link. The move is a compare-and-set on the status and version that were read: when someone else
+   * moved the discrepancy in between, 409 with its current status and version, and nothing changes.
+   */
   async move(id: number, dto: TransitionDto, actor: AuthUser): Promise<DiscrepancyDetailDto> {
     const d = await this.find(id);
     const refused = refusal(d, dto, actor.role);
     if (refused) throwRefusal(refused);
     if (dto.revisionSubmittalId !== undefined) await this.checkRevision(d, dto.revisionSubmittalId);
     await this.sequelize.transaction(async (transaction) => {
-      await this.apply(d, dto.to, dto.note, dto.revisionSubmittalId, actor, transaction);
+      const lost = await this.apply(d, dto.to, dto.note, dto.revisionSubmittalId, actor, transaction);
+      if (lost) {
+        const message = `Discrepancy ${id} was moved by someone else meanwhile: it is now ${lost.status} (version ${lost.version}); it was not moved to ${dto.to}.`;
+        throw new ConflictException({
+          message,
+          details: [{ id, status: lost.status, version: lost.version, message }],
+        });
+      }
     });
     return this.detail(id, actor);
   }
@@ -232,8 +243,31 @@ export class DiscrepanciesService {
       });
     }
     await this.sequelize.transaction(async (transaction) => {
-      for (const id of ids)
-        await this.apply(byId.get(id) as Discrepancy, dto.to, dto.note, undefined, actor, transaction, true);
+      const lost: { id: number; status: string; version: number; message: string }[] = [];
+      for (const id of ids) {
+        const now = await this.apply(
+          byId.get(id) as Discrepancy,
+          dto.to,
+          dto.note,
+          undefined,
+          actor,
+          transaction,
+          true,
+        );
+        if (now)
+          lost.push({
+            id,
+            status: now.status,
+            version: now.version,
+            message: `moved by someone else meanwhile: now ${now.status} (version ${now.version})`,
+          });
+      }
+      // All or nothing: throwing rolls back the moves already made in this transaction.
+      if (lost.length > 0)
+        throw new ConflictException({
+          message: `${lost.length} of ${ids.length} discrepancies were moved by someone else meanwhile; none were moved.`,
+          details: lost,
+        });
     });
     const after = await this.discrepancies.findAll({
       where: { id: { [Op.in]: ids } },
@@ -274,7 +308,12 @@ export class DiscrepanciesService {
     const d = await this.find(id);
     if (!d.acknowledgedAt) {
       await this.sequelize.transaction(async (transaction) => {
-        await d.update({ acknowledgedAt: new Date(), acknowledgedById: actor.id }, { transaction });
+        // Only the first of two simultaneous acknowledgements records one; the other has nothing to do.
+        const [changed] = await this.discrepancies.update(
+          { acknowledgedAt: new Date(), acknowledgedById: actor.id },
+          { where: { id, acknowledgedAt: null }, transaction },
+        );
+        if (changed !== 1) return;
         await this.events.record(
           {
             type: 'discrepancy.acknowledged',
@@ -291,6 +330,11 @@ export class DiscrepanciesService {
     return this.detail(id, actor);
   }
 
+  /**
+   * Moves `d` from the status and version it was read with, records the event and queues the mail.
+   * Returns null when moved; when the row changed since it was read, moves nothing and returns its
+   * current status and version (the caller answers 409 and the transaction rolls back).
+   */
   private async apply(
     d: Discrepancy,
     to: DiscrepancyStatus,
@@ -299,9 +343,16 @@ export class DiscrepanciesService {
     actor: AuthUser,
     transaction: Transaction,
     bulk = false,
-  ): Promise<void> {
+  ): Promise<{ status: DiscrepancyStatus; version: number } | null> {
     const from = d.status;
-    await d.update({ status: to }, { transaction });
+    const [changed] = await this.discrepancies.update(
+      { status: to, version: d.version + 1 },
+      { where: { id: d.id, status: from, version: d.version }, transaction },
+    );
+    if (changed !== 1) {
+      const now = await this.discrepancies.findByPk(d.id, { attributes: ['status', 'version'], transaction });
+      return { status: now?.status ?? from, version: now?.version ?? d.version };
+    }
     await this.events.record(
       {
         type: `discrepancy.${to}`,
@@ -344,6 +395,7 @@ export class DiscrepanciesService {
         transaction,
       );
     }
+    return null;
   }
 
   private async checkRevision(d: Discrepancy, revisionSubmittalId: number): Promise<void> {

@@ -1,4 +1,11 @@
-import { Inject, Injectable, Logger, OnApplicationBootstrap, OnApplicationShutdown } from '@nestjs/common';
+import {
+  BeforeApplicationShutdown,
+  Inject,
+  Injectable,
+  Logger,
+  OnApplicationBootstrap,
+  OnApplicationShutdown,
+} from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { InjectModel } from '@nestjs/sequelize';
 import nodemailer from 'nodemailer';
@@ -30,6 +37,12 @@ export interface MailHealth {
   lastError: string | null;
 }
 
+/**
+ * A message claimed for sending is not due again before this: if the process dies mid-send, or the
+ * row cannot be marked sent, it is retried only after this lease (never twice at once).
+ */
+const SENDING_LEASE_MS = 10 * 60_000;
+
 /** Retry delay after the n-th failed attempt: `baseMs` doubling, at most 10 min. Never given up. */
 export function retryDelayMs(attempts: number, baseMs = 5000): number {
   return Math.min(baseMs * 2 ** Math.max(0, attempts - 1), 10 * 60_000);
@@ -41,7 +54,7 @@ export function retryDelayMs(attempts: number, baseMs = 5000): number {
  * outage therefore never fails a request, and nothing is lost.
  */
 @Injectable()
-export class MailService implements OnApplicationBootstrap, OnApplicationShutdown {
+export class MailService implements OnApplicationBootstrap, BeforeApplicationShutdown, OnApplicationShutdown {
   private readonly logger = new Logger(MailService.name);
   private timer: NodeJS.Timeout | null = null;
   private transporter: Transporter | null = null;
@@ -66,6 +79,13 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
       );
       this.timer.unref();
     }
+  }
+
+  /** Stops the worker and lets a running outbox step finish while the database is still open. */
+  async beforeApplicationShutdown(): Promise<void> {
+    if (this.timer) clearInterval(this.timer);
+    this.timer = null;
+    await this.flushing?.catch(() => undefined);
   }
 
   async onApplicationShutdown(): Promise<void> {
@@ -152,6 +172,14 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
     });
     const result: FlushResult = { sent: 0, failed: 0 };
     for (const message of due) {
+      // Claim it first (compare-and-set on attempts): a message another run or process has claimed
+      // is skipped, and a claimed one is not due again before the lease ends.
+      const attempts = message.attempts + 1;
+      const [claimed] = await this.outbox.update(
+        { attempts, nextAttemptAt: new Date(Date.now() + SENDING_LEASE_MS) },
+        { where: { id: message.id, status: 'pending', attempts: message.attempts } },
+      );
+      if (claimed !== 1) continue;
       try {
         await this.transport().sendMail({
           from: this.config.from,
@@ -159,22 +187,26 @@ export class MailService implements OnApplicationBootstrap, OnApplicationShutdow
           subject: message.subject,
           text: message.text,
         });
-        await message.update({
-          status: 'sent',
-          sentAt: new Date(),
-          attempts: message.attempts + 1,
-          lastError: null,
-        });
-        result.sent++;
       } catch (error) {
-        const attempts = message.attempts + 1;
-        await message.update({
-          attempts,
-          lastError: error instanceof Error ? error.message : String(error),
-          nextAttemptAt: new Date(Date.now() + retryDelayMs(attempts, this.config.retryBaseMs)),
-        });
+        await this.outbox.update(
+          {
+            lastError: error instanceof Error ? error.message : String(error),
+            nextAttemptAt: new Date(Date.now() + retryDelayMs(attempts, this.config.retryBaseMs)),
+          },
+          { where: { id: message.id } },
+        );
         result.failed++;
+        continue;
       }
+      result.sent++;
+      // Sent: a failure to record that must not count as a failed send (that would send it again).
+      await this.outbox
+        .update({ status: 'sent', sentAt: new Date(), lastError: null }, { where: { id: message.id } })
+        .catch((error: unknown) =>
+          this.logger.error(
+            `Mail ${message.id} was sent but could not be marked sent (${error instanceof Error ? error.message : String(error)}); it stays claimed for ${SENDING_LEASE_MS / 60_000} min.`,
+          ),
+        );
     }
     if (result.failed > 0)
       this.logger.warn(`Mail: ${result.failed} message(s) could not be sent; they will be retried.`);

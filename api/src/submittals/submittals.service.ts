@@ -9,7 +9,7 @@ import {
 } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
@@ -233,48 +233,57 @@ export class SubmittalsService {
   }
 
   /** Error-severity discrepancies of the submittal still in an open status. */
-  openErrors(submittalId: number): Promise<Discrepancy[]> {
+  openErrors(submittalId: number, transaction?: Transaction): Promise<Discrepancy[]> {
     return this.discrepancies.findAll({
       where: { submittalId, severity: 'error', status: { [Op.in]: [...OPEN_STATUSES] } },
       order: [['id', 'ASC']],
+      transaction,
     });
   }
 
   /**
    * The checker's review action. Refused (409) once stamped, and while error-severity discrepancies
    * are open unless an override reason is given (the reason is kept with the stamp and the event).
+   * The stamp is a compare-and-set on (not stamped, version) inside the write, and the open errors
+   * are counted in that same write: of two simultaneous stamps exactly one is applied (and mailed);
+   * the other gets 409 with the stamp that won.
    */
   async stamp(id: number, dto: StampSubmittalDto, actor: AuthUser): Promise<SubmittalDto> {
     const submittal = await this.find(id);
-    if (submittal.stampAction)
-      throw new ConflictException(
-        `Submittal ${id} is already stamped "${stampWords(submittal.stampAction)}".`,
-      );
-    const open = await this.openErrors(id);
-    if (open.length > 0 && !dto.overrideReason) {
-      throw new ConflictException({
-        message: `${open.length} error-severity discrepancy(ies) are still open; resolve them or stamp with an overrideReason.`,
-        details: open.map((d) => ({
-          id: d.id,
-          code: d.code,
-          memberId: d.memberId,
-          status: d.status,
-          message: d.message,
-        })),
-      });
-    }
+    if (submittal.stampAction) throw this.alreadyStamped(submittal);
     const recipients = await this.recipients(submittal.projectId);
     await this.sequelize.transaction(async (transaction) => {
-      await submittal.update(
+      const open = await this.openErrors(id, transaction);
+      if (open.length > 0 && !dto.overrideReason) {
+        throw new ConflictException({
+          message: `${open.length} error-severity discrepancy(ies) are still open; resolve them or stamp with an overrideReason.`,
+          details: open.map((d) => ({
+            id: d.id,
+            code: d.code,
+            memberId: d.memberId,
+            status: d.status,
+            message: d.message,
+          })),
+        });
+      }
+      const [changed] = await this.submittals.update(
         {
           stampAction: dto.action,
           stampComment: dto.comment,
           stampOverrideReason: open.length > 0 ? (dto.overrideReason ?? null) : null,
           stampedById: actor.id,
           stampedAt: new Date(),
+          version: submittal.version + 1,
         },
-        { transaction },
+        { where: { id, stampAction: null, version: submittal.version }, transaction },
       );
+      if (changed !== 1) {
+        const now = await this.submittals.findByPk(id, {
+          include: [{ model: User, as: 'stampedBy', attributes: ['name'] }],
+          transaction,
+        });
+        throw this.alreadyStamped(now ?? submittal);
+      }
       await this.events.record(
         {
           type: 'submittal.stamped',
@@ -310,6 +319,17 @@ export class SubmittalsService {
       );
     });
     return this.get(id);
+  }
+
+  /** 409 for a stamp on a stamped submittal, with the stamp that is on it. */
+  private alreadyStamped(s: Submittal): ConflictException {
+    const words = s.stampAction ? stampWords(s.stampAction) : 'changed';
+    const by = s.stampedBy?.name ? ` by ${s.stampedBy.name}` : '';
+    const message = `Submittal ${s.id} is already stamped "${words}"${by}; this stamp was not applied.`;
+    return new ConflictException({
+      message,
+      details: [{ id: s.id, status: 'stamped', action: s.stampAction, version: s.version, message }],
+    });
   }
 
   /** E-mail addresses of the project's active members. */
