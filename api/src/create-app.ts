@@ -1,5 +1,5 @@
 import 'reflect-metadata';
-import type { INestApplication, LogLevel } from '@nestjs/common';
+import { ConsoleLogger, type INestApplication, type LogLevel } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
@@ -36,8 +36,16 @@ export function buildOpenApi(app: INestApplication): OpenAPIObject {
  * tests and the OpenAPI script use it as it is.
  */
 export async function createApp(options: CreateAppOptions = {}): Promise<NestExpressApplication> {
+  const levels = options.logger ?? ['error', 'warn'];
   const app = await NestFactory.create<NestExpressApplication>(AppModule, {
-    logger: options.logger ?? ['error', 'warn'],
+    // Colour codes only on a terminal (and Nest drops them under NO_COLOR): a log file gets plain text.
+    logger:
+      levels === false
+        ? false
+        : new ConsoleLogger({
+            logLevels: levels,
+            colors: Boolean(process.stdout.isTTY),
+          }),
     abortOnError: false,
   });
   app.setGlobalPrefix('api');
@@ -46,7 +54,6 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
   app.set('query parser', 'extended');
   app.useGlobalPipes(createValidationPipe());
   app.useGlobalFilters(new HttpErrorFilter());
-  app.enableShutdownHooks();
   SwaggerModule.setup('api/docs', app, () => buildOpenApi(app), { jsonDocumentUrl: 'api/docs-json' });
   await app.init();
   return app;

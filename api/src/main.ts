@@ -10,6 +10,7 @@ if (problem) {
 // Imported only now: the app module validates the environment as it loads.
 const { createApp } = await import('./create-app.js');
 const { SeedService } = await import('./seed/seed.service.js');
+const { DatabaseService } = await import('./database/database.service.js');
 
 const logger = new Logger('Ligament');
 const app = await createApp().catch((error: unknown) => {
@@ -29,6 +30,37 @@ if (auth.jwtSecret === DEMO_JWT_SECRET) {
   logger.warn('Set JWT_SECRET (16+ characters) before this service holds real data.');
   logger.warn('!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!!');
 }
+
+/**
+ * One way out: close HTTP (requests in flight finish), let the outbox step and queued writes finish,
+ * close the database, then exit with `code` (0 on SIGTERM/SIGINT). A second signal, or a close that
+ * takes more than 10 s, exits at once.
+ */
+let stopping = false;
+async function stop(code: number, why: string): Promise<void> {
+  if (stopping) {
+    process.exit(code || 1);
+  }
+  stopping = true;
+  process.stdout.write(`Ligament is stopping (${why})...\n`);
+  setTimeout(() => {
+    process.stderr.write('Ligament: shutdown took more than 10 s; exiting now.\n');
+    process.exit(code || 1);
+  }, 10_000).unref();
+  try {
+    await app.close();
+  } catch (error) {
+    process.stderr.write(
+      `Ligament: shutdown failed: ${error instanceof Error ? error.message : String(error)}\n`,
+    );
+    code ||= 1;
+  }
+  process.stdout.write('Ligament stopped.\n');
+  process.exit(code);
+}
+for (const signal of ['SIGTERM', 'SIGINT'] as const) process.on(signal, () => void stop(0, signal));
+// A damaged, vanished or unreadable database file: stop non-zero so a supervisor restarts the service.
+app.get(DatabaseService).onUnrecoverable((fault) => void stop(1, `database ${fault.code}`));
 
 const seeded = config.demo ? await app.get(SeedService).seedIfEmpty() : null;
 await app.listen(config.port, config.host);
