@@ -6,6 +6,10 @@
  *   2. with 10,000 discrepancies stored, GET /api/projects/:id/discrepancies at 10 connections
  *      against GET /api/health in the same run, after an unmeasured warm-up of each, in alternating
  *      rounds (targets: ≥ 0.7 × health req/s, p99 ≤ 50 ms in the worst round).
+ *   3. concurrency: 50 single-file uploads at once, then 200 discrepancy moves at once, while
+ *      /api/health is polled one request after another (targets: 0 errors, health p99 < 100 ms
+ *      throughout), then the outbox is drained by the worker and two flushes at once (target: every
+ *      mail received exactly once).
  * Prints the figures and the ratio; exits 1 when a target is missed.
  */
 import autocannon from 'autocannon';
@@ -165,6 +169,16 @@ try {
     }),
   );
   const auth = { Authorization: `Bearer ${login.accessToken}` };
+  const signIn = async (email) =>
+    json(
+      await fetch(`${base}/api/auth/login`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ email, password: 'lantern-demo-2026' }),
+      }),
+    ).then((b) => ({ Authorization: `Bearer ${b.accessToken}` }));
+  const consultant = await signIn('priya@fennick-ode.example.test');
+  const admin = await signIn('sam@tidewater-crossing.example.test');
 
   // 1. Upload + recompute of a 200-file submittal.
   const form = new FormData();
@@ -181,6 +195,78 @@ try {
     await fetch(`${base}/api/submittals/${upload.submittalId}/recheck`, { method: 'POST', headers: auth }),
   );
   const recheckMs = performance.now() - t1;
+
+  // 3. Concurrency (before the copies of step 2, so the moves act on real rows).
+  const healthSamples = [];
+  let sampling = true;
+  const sampler = (async () => {
+    while (sampling) {
+      const h0 = performance.now();
+      const res = await fetch(`${base}/api/health`);
+      await res.arrayBuffer();
+      healthSamples.push({ ms: performance.now() - h0, ok: res.status === 200 });
+    }
+  })();
+  const c0 = performance.now();
+  const uploads = await Promise.all(
+    Array.from({ length: 50 }, async (_, i) => {
+      const one = new FormData();
+      one.append('title', `Bench: parallel ${i}`);
+      one.append('files', new Blob([calcFile(i * 4)], { type: 'application/json' }), `parallel-${i}.json`);
+      const res = await fetch(`${base}/api/projects/1/submittals`, {
+        method: 'POST',
+        headers: consultant,
+        body: one,
+      });
+      await res.arrayBuffer();
+      return res.status;
+    }),
+  );
+  const uploadsMs = performance.now() - c0;
+  const raised = await json(
+    await fetch(`${base}/api/projects/1/discrepancies?status=raised&pageSize=200`, { headers: consultant }),
+  );
+  const m0 = performance.now();
+  const moves = await Promise.all(
+    raised.items.map(async (d) => {
+      const res = await fetch(`${base}/api/discrepancies/${d.id}/transitions`, {
+        method: 'POST',
+        headers: { ...consultant, 'content-type': 'application/json' },
+        body: JSON.stringify({ to: 'answered', note: 'Bench: answered at once.' }),
+      });
+      await res.arrayBuffer();
+      return res.status;
+    }),
+  );
+  const movesMs = performance.now() - m0;
+  // Drain the outbox: the service's worker runs meanwhile, and two flushes go at once.
+  const outboxDb = new sqlite3.Database(dbFile, sqlite3.OPEN_READONLY);
+  for (let i = 0; i < 200; i++) {
+    const { n } = await get(outboxDb, "SELECT COUNT(*) AS n FROM mail_outbox WHERE status = 'pending'");
+    if (n === 0) break;
+    await Promise.all(
+      [1, 2].map(async () =>
+        (await fetch(`${base}/api/mail/outbox/flush`, { method: 'POST', headers: admin })).arrayBuffer(),
+      ),
+    );
+  }
+  sampling = false;
+  await sampler;
+  const { n: sentMails } = await get(outboxDb, "SELECT COUNT(*) AS n FROM mail_outbox WHERE status = 'sent'");
+  const { n: pendingMails } = await get(
+    outboxDb,
+    "SELECT COUNT(*) AS n FROM mail_outbox WHERE status = 'pending'",
+  );
+  const { n: receivedMails } = await get(outboxDb, 'SELECT COUNT(*) AS n FROM mailbox_messages');
+  await new Promise((resolve) => outboxDb.close(resolve));
+  const uploadErrors = uploads.filter((st) => st !== 201).length;
+  const moveErrors = moves.filter((st) => st !== 200).length;
+  const healthP99 = percentile(
+    healthSamples.map((h) => h.ms),
+    99,
+  );
+  const healthErrors = healthSamples.filter((h) => !h.ok).length;
+  const mailOnce = receivedMails === sentMails && pendingMails === 0;
 
   // 2. Bring the project to 10,000 stored discrepancies by copying real rows (same shape, same indexes).
   const db = new sqlite3.Database(dbFile);
@@ -233,6 +319,30 @@ try {
       list.p99 <= 50 ? 'ok (p99 ≤ 50 ms)' : 'MISSED (p99 ≤ 50 ms)',
     ],
     ['ratio list / health', ratio.toFixed(2), '', ratio >= 0.7 ? 'ok (≥ 0.70)' : 'MISSED (≥ 0.70)'],
+    [
+      '50 uploads at once',
+      `${uploadsMs.toFixed(0)} ms`,
+      `errors ${uploadErrors}`,
+      uploadErrors === 0 ? 'ok (0 errors)' : 'MISSED (0 errors)',
+    ],
+    [
+      `${moves.length} moves at once`,
+      `${movesMs.toFixed(0)} ms`,
+      `errors ${moveErrors}`,
+      moveErrors === 0 && moves.length === 200 ? 'ok (200, 0 errors)' : 'MISSED (200, 0 errors)',
+    ],
+    [
+      'GET /api/health during uploads, moves, mail',
+      `p99 ${healthP99.toFixed(1)} ms`,
+      `${healthSamples.length} polls, max ${Math.max(...healthSamples.map((h) => h.ms)).toFixed(1)} ms, errors ${healthErrors}`,
+      healthP99 < 100 && healthErrors === 0 ? 'ok (p99 < 100 ms)' : 'MISSED (p99 < 100 ms)',
+    ],
+    [
+      'mail sent once',
+      `${receivedMails} received`,
+      `${sentMails} sent, ${pendingMails} pending`,
+      mailOnce ? 'ok (received = sent)' : 'MISSED (received = sent)',
+    ],
   ];
   process.stdout.write(
     `\nLigament API bench (loopback, ${CONNECTIONS} connections, ${ROUNDS} alternating rounds of ${ROUND_S} s per route)\n`,
@@ -240,6 +350,8 @@ try {
   for (const r of rows)
     process.stdout.write(`  ${r[0].padEnd(48)} ${r[1].padStart(12)}  ${r[2].padEnd(52)} ${r[3]}\n`);
   if (uploadMs > 3000 || list.p99 > 50 || ratio < 0.7 || list.non2xx > 0 || health.non2xx > 0) exitCode = 1;
+  if (uploadErrors || moveErrors || moves.length !== 200 || healthP99 >= 100 || healthErrors || !mailOnce)
+    exitCode = 1;
 } catch (error) {
   process.stderr.write(`bench: ${error instanceof Error ? error.message : String(error)}\n`);
   exitCode = 2;
