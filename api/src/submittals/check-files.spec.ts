@@ -87,3 +87,50 @@ describe('checkFiles', () => {
     ]);
   });
 });
+
+describe('recompute limits', () => {
+  function holes(n: number): Buffer {
+    const doc = JSON.parse(plate('BIG').toString()) as { members: { width: number; holes: unknown[] }[] };
+    const member = doc.members[0] as { width: number; holes: unknown[] };
+    member.width = 14;
+    member.holes = Array.from({ length: n }, (_, i) => ({
+      id: `H${i}`,
+      x: 3 * Math.floor(i / 4),
+      y: 2 + 3 * (i % 4),
+      bolt: '3/4',
+    }));
+    return Buffer.from(JSON.stringify(doc));
+  }
+
+  it('a member with more than 1,000 holes is refused with file, pointer and rule, and nothing is recomputed', () => {
+    const outcome = checkFiles([{ name: 'big.json', content: holes(1001) }], rules);
+    expect(outcome.ok).toBe(false);
+    if (outcome.ok) return;
+    expect(outcome.errors).toEqual([
+      expect.objectContaining({
+        file: 'big.json',
+        pointer: '/members/0/holes',
+        rule: 'max-holes-per-member',
+      }),
+    ]);
+    expect(outcome.errors[0]?.message).toMatch(/1001 holes; at most 1000/);
+  });
+
+  it('an upload of more than 20,000 holes in all is refused at the member where the budget runs out', () => {
+    const files = Array.from({ length: 21 }, (_, i) => ({ name: `f${i}.json`, content: holes(1000) }));
+    const outcome = checkFiles(files, rules);
+    expect(outcome.ok).toBe(false);
+    if (outcome.ok) return;
+    expect(outcome.errors).toEqual([
+      expect.objectContaining({
+        file: 'f20.json',
+        pointer: '/members/0/holes',
+        rule: 'max-holes-per-upload',
+      }),
+    ]);
+  });
+
+  it('1,000 holes in a member are accepted', () => {
+    expect(checkFiles([{ name: 'ok.json', content: holes(1000) }], rules).ok).toBe(true);
+  });
+});

@@ -22,13 +22,67 @@ export interface CheckRules {
   readonly allowedExtensions: readonly string[];
 }
 
+/**
+ * How much recomputation one upload may ask for. The engine's time grows with the holes of a member
+ * (about 0.1 ms per hole on the 2-core bench machine), so these bound the time one upload can take:
+ * 1,000 holes is far beyond a real bolted splice or gusset (common practice: tens to a few hundred),
+ * and 20,000 holes per upload is 250 files of 80 holes.
+ */
+export const RECOMPUTE_LIMITS = { holesPerMember: 1000, holesPerUpload: 20_000 } as const;
+
+function pointerError(file: string, pointer: string, rule: string, message: string): CalcError {
+  return {
+    file,
+    pointer,
+    line: 1,
+    column: 1,
+    rule,
+    message: `${file} ${pointer}: ${message} (rule ${rule})`,
+  };
+}
+
+/** Errors for members with too many holes, and for the member where the upload's budget runs out. */
+function workErrors(loaded: readonly { file: IncomingFile; document: CalcDocument }[]): CalcError[] {
+  const errors: CalcError[] = [];
+  let total = 0;
+  let budgetReported = false;
+  for (const { file, document } of loaded) {
+    document.members.forEach((member, i) => {
+      const holes = member.input.holes.length;
+      const pointer = `/members/${i}/holes`;
+      if (holes > RECOMPUTE_LIMITS.holesPerMember)
+        errors.push(
+          pointerError(
+            file.name,
+            pointer,
+            'max-holes-per-member',
+            `member ${member.input.id} has ${holes} holes; at most ${RECOMPUTE_LIMITS.holesPerMember} are recomputed per member`,
+          ),
+        );
+      total += holes;
+      if (total > RECOMPUTE_LIMITS.holesPerUpload && !budgetReported) {
+        budgetReported = true;
+        errors.push(
+          pointerError(
+            file.name,
+            pointer,
+            'max-holes-per-upload',
+            `the upload passes ${RECOMPUTE_LIMITS.holesPerUpload} holes in all at this member; split it into smaller submittals`,
+          ),
+        );
+      }
+    });
+  }
+  return errors;
+}
+
 function fileError(file: string, rule: string, message: string): CalcError {
   return { file, pointer: '', line: 1, column: 1, rule, message: `${file}: ${message} (rule ${rule})` };
 }
 
 /**
- * Validates every file (extension, unique name, UTF-8, the calc loader) and, only when all are valid,
- * recomputes every member with the engine. Pure: no I/O, so the upload can run it before it opens a
+ * Validates every file (extension, unique name, UTF-8, the calc loader, RECOMPUTE_LIMITS) and, only
+ * when all are valid, recomputes every member with the engine. Pure: no I/O, so the upload can run it before it opens a
  * transaction, and the recheck can run it again on stored bytes.
  */
 export function checkFiles(files: readonly IncomingFile[], rules: CheckRules): CheckOutcome {
@@ -65,6 +119,9 @@ export function checkFiles(files: readonly IncomingFile[], rules: CheckRules): C
     }
   }
   if (errors.length > 0) return { ok: false, errors, invalidFiles: invalid.size };
+  const tooMuch = workErrors(loaded);
+  if (tooMuch.length > 0)
+    return { ok: false, errors: tooMuch, invalidFiles: new Set(tooMuch.map((e) => e.file)).size };
   return {
     ok: true,
     files: loaded.map(({ file, document }) => ({
