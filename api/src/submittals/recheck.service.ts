@@ -9,7 +9,7 @@ import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { EventsService } from '../events/events.service.js';
 import { MemberResult } from '../results/models/member-result.model.js';
 import { findingChain, findingKey, inputsHash } from '../results/result-rows.js';
-import { checkFiles } from './check-files.js';
+import { RecomputePool } from './recompute-pool.service.js';
 import type { RecheckDto, RecheckFindingDto, RecheckValueChangeDto } from './dto/revision.dto.js';
 import { SubmittalsService } from './submittals.service.js';
 
@@ -34,6 +34,7 @@ export class RecheckService {
     @Inject(uploadsConfig.KEY) private readonly limits: ConfigType<typeof uploadsConfig>,
     private readonly submittals: SubmittalsService,
     private readonly events: EventsService,
+    private readonly pool: RecomputePool,
   ) {}
 
   async recheck(submittalId: number, actor: AuthUser): Promise<RecheckDto> {
@@ -44,7 +45,7 @@ export class RecheckService {
       this.discrepancies.findAll({ where: { submittalId } }),
     ]);
     const fileNames = new Map(files.map((f) => [f.id, f.fileName]));
-    const outcome = checkFiles(
+    const outcome = await this.pool.check(
       files.map((f) => ({ name: f.fileName, content: f.content })),
       this.limits,
     );

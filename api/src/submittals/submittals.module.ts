@@ -12,6 +12,7 @@ import { Project } from '../projects/models/project.model.js';
 import { MemberResult } from '../results/models/member-result.model.js';
 import { Submittal } from './models/submittal.model.js';
 import { RecheckService } from './recheck.service.js';
+import { RecomputePool } from './recompute-pool.service.js';
 import { RevisionsService } from './revisions.service.js';
 import { SubmittalsController } from './submittals.controller.js';
 import { SubmittalsService } from './submittals.service.js';
@@ -33,7 +34,7 @@ import { SubmittalsService } from './submittals.service.js';
     MailModule,
   ],
   controllers: [SubmittalsController],
-  providers: [SubmittalsService, RevisionsService, RecheckService],
+  providers: [SubmittalsService, RevisionsService, RecheckService, RecomputePool],
   exports: [SubmittalsService],
 })
 export class SubmittalsModule {}

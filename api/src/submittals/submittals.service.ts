@@ -23,7 +23,8 @@ import { Project } from '../projects/models/project.model.js';
 import { MemberResult } from '../results/models/member-result.model.js';
 import { discrepancyRow, memberResultRow } from '../results/result-rows.js';
 import { User } from '../users/models/user.model.js';
-import { checkFiles, type IncomingFile } from './check-files.js';
+import { type IncomingFile } from './check-files.js';
+import { RecomputePool } from './recompute-pool.service.js';
 import type {
   CreateSubmittalDto,
   StampSubmittalDto,
@@ -57,6 +58,7 @@ export class SubmittalsService {
     @Inject(uploadsConfig.KEY) private readonly limits: ConfigType<typeof uploadsConfig>,
     @Inject(appConfig.KEY) private readonly app: ConfigType<typeof appConfig>,
     private readonly events: EventsService,
+    private readonly pool: RecomputePool,
     private readonly mail: MailService,
   ) {}
 
@@ -98,7 +100,7 @@ export class SubmittalsService {
         });
       }
     }
-    const outcome = checkFiles(files, this.limits);
+    const outcome = await this.pool.check(files, this.limits);
     if (!outcome.ok) {
       throw new UnprocessableEntityException({
         message: `${outcome.invalidFiles} of ${files.length} file(s) are invalid (${outcome.errors.length} error(s)); nothing was stored.`,
