@@ -15,7 +15,7 @@ import {
   type TableColumnDefinition,
   type TableColumnId,
 } from '@fluentui/react-components';
-import { useEffect, useState, type KeyboardEvent } from 'react';
+import { useEffect, useState } from 'react';
 import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
 import type { Schema } from '@/lib/api-schemas';
 import type { DiscrepancyFilters } from '../api/get-discrepancies';
@@ -73,7 +73,7 @@ export interface DiscrepancyGridProps {
 
 /**
  * The discrepancy grid. Sorting is the server's: the grid only shows the arrow and asks for a new
- * page; the rows arrive in order. Arrow keys move between rows; Enter opens the focused one.
+ * page; the rows arrive in order.
  */
 export function DiscrepancyGrid({
   items,
@@ -235,14 +235,6 @@ export function DiscrepancyGrid({
                   : undefined
               }
               data-testid="discrepancy-row"
-              onKeyDown={(event: KeyboardEvent<HTMLElement>) => {
-                // Enter on a focused row (or one of its plain cells) opens it; a button or checkbox
-                // inside keeps its own Enter.
-                if (event.key !== 'Enter') return;
-                if ((event.target as HTMLElement).closest('button, input, a, [role="checkbox"]')) return;
-                event.preventDefault();
-                onOpen(item.id);
-              }}
             >
               {({ renderCell, columnId }) => (
                 <DataGridCell className={sizeOf(columnId)}>{renderCell(item)}</DataGridCell>

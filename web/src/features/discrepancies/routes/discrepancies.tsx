@@ -10,27 +10,16 @@ import {
   Text,
   tokens,
 } from '@fluentui/react-components';
-import {
-  ArrowDownloadRegular,
-  ChevronLeftRegular,
-  ChevronRightRegular,
-  DocumentBulletListRegular,
-} from '@fluentui/react-icons';
-import { useMutation } from '@tanstack/react-query';
-import type { UnitSystem } from 'ligament/engine';
+import { ChevronLeftRegular, ChevronRightRegular, DocumentBulletListRegular } from '@fluentui/react-icons';
 import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
-import { api, unwrap } from '@/lib/api-client';
-import { notify } from '@/lib/notify';
-import { queryClient } from '@/lib/query-client';
 import { useSession } from '@/lib/session';
-import { getDiscrepancies, useDiscrepancies, type DiscrepancyFilters } from '../api/get-discrepancies';
+import { useDiscrepancies, type DiscrepancyFilters } from '../api/get-discrepancies';
 import { useDiscrepancyProjects } from '../api/get-discrepancy-projects';
 import { BulkMoveBar } from '../components/bulk-move-bar';
-import { discrepanciesCsv } from '../components/discrepancy-csv';
 import { DiscrepancyDetail } from '../components/discrepancy-detail';
 import { DiscrepancyFilters as FiltersBar, type FilterValues } from '../components/discrepancy-filters';
 import { DiscrepancyGrid } from '../components/discrepancy-grid';
@@ -63,13 +52,6 @@ const useStyles = makeStyles({
   },
   pagerButtons: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
   picker: { maxWidth: '420px', marginBottom: tokens.spacingVerticalL },
-  listTools: {
-    display: 'flex',
-    justifyContent: 'flex-end',
-    flexWrap: 'wrap',
-    gap: tokens.spacingHorizontalS,
-    marginBottom: tokens.spacingVerticalS,
-  },
 });
 
 const SORTS: readonly DiscrepancyFilters['sort'][] = [
@@ -95,44 +77,6 @@ function useWideLayout(): boolean {
     return () => query.removeEventListener('change', onChange);
   }, []);
   return wide;
-}
-
-/** The largest page the list endpoint gives; the export walks every page of the filtered list. */
-const EXPORT_PAGE = 500;
-
-/**
- * Every discrepancy the filters match (all pages, in the list's order) as a CSV download, with the
- * unit of each number taken from its calc file's unit system.
- */
-async function exportCsv(projectId: number, filters: DiscrepancyFilters, fileTag: string): Promise<number> {
-  const rows = [];
-  for (let page = 1; ; page += 1) {
-    const next = await getDiscrepancies(projectId, { ...filters, page, pageSize: EXPORT_PAGE });
-    rows.push(...next.items);
-    if (next.items.length === 0 || rows.length >= next.total) break;
-  }
-  const unitsByFile = new Map<number, UnitSystem>();
-  for (const fileId of new Set(rows.map((r) => r.calcFileId))) {
-    const units = await queryClient.fetchQuery({
-      queryKey: ['calc-files', fileId, 'units'],
-      staleTime: Infinity,
-      queryFn: async () => {
-        const file = unwrap(await api.GET('/api/calc-files/{fileId}', { params: { path: { fileId } } }));
-        return (file.document as unknown as { profile: { units: UnitSystem } }).profile.units;
-      },
-    });
-    unitsByFile.set(fileId, units);
-  }
-  const blob = new Blob([discrepanciesCsv(rows, unitsByFile)], { type: 'text/csv;charset=utf-8' });
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = `discrepancies-${fileTag}-${new Date().toISOString().slice(0, 10)}.csv`;
-  document.body.append(link);
-  link.click();
-  link.remove();
-  URL.revokeObjectURL(url);
-  return rows.length;
 }
 
 const list = (v: string | null) => (v ? v.split(',').filter(Boolean) : []);
@@ -161,15 +105,6 @@ export function Component() {
     pageSize: [25, 50, 100].includes(Number(params.get('pageSize'))) ? Number(params.get('pageSize')) : 25,
   };
   const discrepancies = useDiscrepancies(projectId, filters);
-  const csv = useMutation({
-    mutationFn: () =>
-      exportCsv(
-        projectId ?? 0,
-        filters,
-        `project-${projectId}${filters.submittalId ? `-submittal-${filters.submittalId}` : ''}`,
-      ),
-    onError: (error) => notify({ intent: 'error', title: 'The export did not finish', body: error.message }),
-  });
 
   const update = (
     next: Record<string, string | readonly string[] | number | undefined>,
@@ -246,107 +181,93 @@ export function Component() {
       </Field>
       <div className={mergeClasses(styles.layout, open && wide && styles.layoutWithDetail)}>
         <Section>
-          <div data-testid="discrepancy-list" aria-busy={discrepancies.isFetching}>
-            <FiltersBar
-              values={filterValues}
-              onChange={(next) => update(next)}
-              onClear={() => {
-                setParams(
-                  new URLSearchParams(projectId ? { projectId: String(projectId), status: '' } : {}),
-                  {
-                    replace: true,
-                  },
-                );
-                setSelected(new Set());
-              }}
+          <FiltersBar
+            values={filterValues}
+            onChange={(next) => update(next)}
+            onClear={() => {
+              setParams(new URLSearchParams(projectId ? { projectId: String(projectId), status: '' } : {}), {
+                replace: true,
+              });
+              setSelected(new Set());
+            }}
+          />
+          {filters.submittalId && (
+            <Button
+              size="small"
+              onClick={() => update({ submittalId: undefined })}
+              style={{ marginBottom: tokens.spacingVerticalS }}
+            >
+              Showing submittal #{filters.submittalId} only — show all
+            </Button>
+          )}
+          {role === 'checker' && selected.size > 0 && projectId !== undefined && (
+            <BulkMoveBar
+              projectId={projectId}
+              selectedIds={[...selected]}
+              onDone={() => setSelected(new Set())}
             />
-            <div className={styles.listTools}>
-              <Button
-                icon={<ArrowDownloadRegular />}
-                onClick={() => csv.mutate()}
-                disabled={csv.isPending || total === 0}
-              >
-                {csv.isPending ? 'Exporting…' : `Export ${total} as CSV`}
-              </Button>
-            </div>
-            {filters.submittalId && (
-              <Button
-                size="small"
-                onClick={() => update({ submittalId: undefined })}
-                style={{ marginBottom: tokens.spacingVerticalS }}
-              >
-                Showing submittal #{filters.submittalId} only — show all
-              </Button>
-            )}
-            {role === 'checker' && selected.size > 0 && projectId !== undefined && (
-              <BulkMoveBar
-                projectId={projectId}
-                selectedIds={[...selected]}
-                onDone={() => setSelected(new Set())}
+          )}
+          {discrepancies.isPending ? (
+            <LoadingState label="Loading discrepancies…" />
+          ) : discrepancies.isError ? (
+            <ErrorState error={discrepancies.error} onRetry={() => void discrepancies.refetch()} />
+          ) : discrepancies.data.items.length === 0 ? (
+            <EmptyState title="Nothing matches these filters" icon={<DocumentBulletListRegular />}>
+              {filters.status?.includes('open')
+                ? 'No open discrepancies: every one has been accepted or waived, or none were raised.'
+                : 'Try other filters.'}
+            </EmptyState>
+          ) : (
+            <>
+              <DiscrepancyGrid
+                items={discrepancies.data.items}
+                sort={filters.sort}
+                order={filters.order}
+                onSort={(sort, order) => update({ sort, order })}
+                selectable={role === 'checker'}
+                selected={selected}
+                onSelect={setSelected}
+                activeId={activeId}
+                onOpen={setActiveId}
               />
-            )}
-            {discrepancies.isPending ? (
-              <LoadingState label="Loading discrepancies…" />
-            ) : discrepancies.isError ? (
-              <ErrorState error={discrepancies.error} onRetry={() => void discrepancies.refetch()} />
-            ) : discrepancies.data.items.length === 0 ? (
-              <EmptyState title="Nothing matches these filters" icon={<DocumentBulletListRegular />}>
-                {filters.status?.includes('open')
-                  ? 'No open discrepancies: every one has been accepted or waived, or none were raised.'
-                  : 'Try other filters.'}
-              </EmptyState>
-            ) : (
-              <>
-                <DiscrepancyGrid
-                  items={discrepancies.data.items}
-                  sort={filters.sort}
-                  order={filters.order}
-                  onSort={(sort, order) => update({ sort, order })}
-                  selectable={role === 'checker'}
-                  selected={selected}
-                  onSelect={setSelected}
-                  activeId={activeId}
-                  onOpen={setActiveId}
-                />
-                <nav className={styles.pager} aria-label="Pages">
-                  <Text>
-                    {total} discrepanc{total === 1 ? 'y' : 'ies'} · page {filters.page} of {pages}
-                    {discrepancies.isFetching ? ' · updating…' : ''}
-                  </Text>
-                  <div className={styles.pagerButtons}>
-                    <Dropdown
-                      aria-label="Rows per page"
-                      value={`${filters.pageSize} per page`}
-                      selectedOptions={[String(filters.pageSize)]}
-                      onOptionSelect={(_, d) => update({ pageSize: d.optionValue })}
-                      style={{ minWidth: '140px' }}
-                    >
-                      {[25, 50, 100].map((n) => (
-                        <Option key={n} value={String(n)} text={`${n} per page`}>
-                          {`${n} per page`}
-                        </Option>
-                      ))}
-                    </Dropdown>
-                    <Button
-                      icon={<ChevronLeftRegular />}
-                      disabled={filters.page <= 1}
-                      onClick={() => update({ page: filters.page - 1 }, false)}
-                    >
-                      Previous
-                    </Button>
-                    <Button
-                      icon={<ChevronRightRegular />}
-                      iconPosition="after"
-                      disabled={filters.page >= pages}
-                      onClick={() => update({ page: filters.page + 1 }, false)}
-                    >
-                      Next
-                    </Button>
-                  </div>
-                </nav>
-              </>
-            )}
-          </div>
+              <nav className={styles.pager} aria-label="Pages">
+                <Text>
+                  {total} discrepanc{total === 1 ? 'y' : 'ies'} · page {filters.page} of {pages}
+                  {discrepancies.isFetching ? ' · updating…' : ''}
+                </Text>
+                <div className={styles.pagerButtons}>
+                  <Dropdown
+                    aria-label="Rows per page"
+                    value={`${filters.pageSize} per page`}
+                    selectedOptions={[String(filters.pageSize)]}
+                    onOptionSelect={(_, d) => update({ pageSize: d.optionValue })}
+                    style={{ minWidth: '140px' }}
+                  >
+                    {[25, 50, 100].map((n) => (
+                      <Option key={n} value={String(n)} text={`${n} per page`}>
+                        {`${n} per page`}
+                      </Option>
+                    ))}
+                  </Dropdown>
+                  <Button
+                    icon={<ChevronLeftRegular />}
+                    disabled={filters.page <= 1}
+                    onClick={() => update({ page: filters.page - 1 }, false)}
+                  >
+                    Previous
+                  </Button>
+                  <Button
+                    icon={<ChevronRightRegular />}
+                    iconPosition="after"
+                    disabled={filters.page >= pages}
+                    onClick={() => update({ page: filters.page + 1 }, false)}
+                  >
+                    Next
+                  </Button>
+                </div>
+              </nav>
+            </>
+          )}
         </Section>
         {open && wide && (
           <aside className={styles.detail} aria-label="Discrepancy details" data-testid="discrepancy-aside">
