@@ -24,7 +24,7 @@ const sectionHole = (
   type: 'standard',
 });
 
-// AISC teaching calc to AISC 360-16 (REFERENCES R6): 2L6x6x5/8, A36, 9 × 7/8 in bolts at 3 in,
+// AISC teaching calc to AISC 360-16 (conformance/SOURCES.md R6): 2L6x6x5/8, A36, 9 × 7/8 in bolts at 3 in,
 // x̄ 1.72 in, Ag 14.26 in² tabulated (the example's). Gauge 2.25 and end distance 2-1/8 derived from
 // the published block shear areas (see sections.fixtures.ts).
 const twoL6: MemberInput = {

@@ -7,7 +7,7 @@ const LRFD: CodeProfile = { standard: 'AISC 360-22', method: 'LRFD', units: 'in'
 const ASD: CodeProfile = { ...LRFD, method: 'ASD' };
 const MM: CodeProfile = { standard: 'AISC 360-16', method: 'LRFD', units: 'mm' };
 
-// AISC Design Examples v13.0, Example D.9 (REFERENCES R1): PL 14 × 1/2, A36, 3/4 in bolts.
+// AISC Design Examples v13.0, Example D.9 (conformance/SOURCES.md R1): PL 14 × 1/2, A36, 3/4 in bolts.
 const d9: MemberInput = {
   id: 'D9',
   kind: 'plate',
@@ -23,7 +23,7 @@ const d9: MemberInput = {
   ],
 };
 
-/** Three holes across at gauge 75 mm, centred (Holtz, CSA S16 course notes, Example T10, REFERENCES R3). */
+/** Three holes across at gauge 75 mm, centred (Holtz, CSA S16 course notes, Example T10, conformance/SOURCES.md R3). */
 const holtz = (id: string, width: number, thickness: number, kind: MemberInput['kind']): MemberInput => ({
   id,
   kind,

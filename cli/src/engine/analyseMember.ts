@@ -86,7 +86,7 @@ function fromProfile(s: ProfileStrength): Strength {
 }
 
 /**
- * Net section and tensile strength of a member for each load direction (DOMAIN §3–5, AISC 360 D2,
+ * Net section and tensile strength of a member for each load direction (cli/docs/method.md §3–5, AISC 360 D2,
  * D3, J4.1): Ag = width·t; per direction the least chain that can form under the full load, its k
  * least companions and the equal-share check; An = min over directions of min(governing net area, Ag);
  * Ae = An·U (U = 1.0 by default, Table D3.1 case 1), capped at 0.85 Ag for bolted splice plates only

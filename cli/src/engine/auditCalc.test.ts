@@ -11,7 +11,7 @@ const bolt = (id: string, x: number, y: number): HoleInput => ({
   boltDiameter: 0.75,
   type: 'standard',
 });
-// AISC Design Examples v13.0, Example D.9 (REFERENCES R1).
+// AISC Design Examples v13.0, Example D.9 (conformance/SOURCES.md R1).
 const d9: MemberInput = {
   id: 'SP-1',
   kind: 'splice-plate',

@@ -12,7 +12,7 @@ const bolt = (id: string, x: number, y: number): HoleInput => ({
   type: 'standard',
 });
 
-// AISC Design Examples v13.0, Example D.9 (REFERENCES R1), loaded from -x.
+// AISC Design Examples v13.0, Example D.9 (conformance/SOURCES.md R1), loaded from -x.
 const d9: MemberInput = {
   id: 'SP-1',
   kind: 'splice-plate',

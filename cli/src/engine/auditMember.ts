@@ -133,7 +133,7 @@ function context(result: MemberResult, key: ScalarClaim, outline: MemberBlockOut
 /**
  * Audits one member of a calc file: recomputes it from its input (never trusting a claim) and
  * compares every claimed number, classifying each difference by what it means for safety
- * (DOMAIN §8, codes in FINDING_CATALOGUE): overstated claims (LG101–LG105, errors),
+ * (cli/docs/method.md §8, codes in FINDING_CATALOGUE): overstated claims (LG101–LG105, errors),
  * understated ones (LG111–LG115, notes), claimed chains that do not exist (LG123) or cannot form
  * (LG122), claimed net widths that differ (LG124), a governing chain missing from the claimed chains
  * (LG121) or a controlling chain that is not the governing one (LG125), the equal-share check
@@ -342,7 +342,7 @@ export function auditMember(
     }
   }
 
-  // Equal-share check (DOMAIN §4).
+  // Equal-share check (cli/docs/method.md §4).
   for (const d of result.directions) {
     const share = d.share;
     if (!share || !(share.equivalentArea < d.An * (1 - 1e-9))) continue;

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { buildChain } from './buildChain.js';
 import type { HoleLayout } from './types.js';
 
-// Quimby, A Beginner's Guide to the Steel Construction Manual, Example 1 (REFERENCES R2): PL 12 × 3/8,
+// Quimby, A Beginner's Guide to the Steel Construction Manual, Example 1 (conformance/SOURCES.md R2): PL 12 × 3/8,
 // effective hole 0.875 in, a 4-hole chain with two stagger legs s = 3, g = 3. The layout beyond that
 // chain is not published; the holes below are placed to give exactly those legs.
 const quimby: HoleLayout = {

@@ -2,7 +2,7 @@ import { gaugeLines } from './gaugeLines.js';
 import type { ChainDefect, HoleLayout } from './types.js';
 
 /**
- * Why a list of hole ids is not a chain (DOMAIN §3: holes in strictly increasing y, at most one per
+ * Why a list of hole ids is not a chain (cli/docs/method.md §3: holes in strictly increasing y, at most one per
  * gauge line), or null when it is one.
  *
  * @param layout - the holes and plate

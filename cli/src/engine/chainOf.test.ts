@@ -4,7 +4,7 @@ import { EngineError } from './engineError.js';
 import { d9 } from './layouts.fixtures.js';
 
 // AISC Design Examples v13.0, Example D.9: plate 14 × 1/2 in, hole width 0.875 in, outer holes at
-// y = 2 and 12, inner holes at y = 5 and 9 staggered 2.5 in (REFERENCES R1).
+// y = 2 and 12, inner holes at y = 5 and 9 staggered 2.5 in (conformance/SOURCES.md R1).
 /** A value printed to `decimals` places in a source: the engine's value must round to it. */
 function expectPrinted(value: number, printed: number, decimals: number): void {
   expect(Math.abs(value - printed)).toBeLessThanOrEqual(0.5 * 10 ** -decimals + 1e-9);

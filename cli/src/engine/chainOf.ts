@@ -4,7 +4,7 @@ import { EngineError } from './engineError.js';
 import type { Chain, HoleLayout } from './types.js';
 
 /**
- * Builds a chain from hole ids: its legs (s, g, s²/4g), deductions and net width (DOMAIN §3,
+ * Builds a chain from hole ids: its legs (s, g, s²/4g), deductions and net width (cli/docs/method.md §3,
  * AISC 360 B4.3b: wn = Wg − Σ d + Σ s²/4g, An = wn·t; every hole is deducted in full).
  *
  * @param layout - the holes and plate

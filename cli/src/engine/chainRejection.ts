@@ -6,7 +6,7 @@ import type { ChainRejection, HoleLayout, LoadDirection } from './types.js';
 
 /**
  * Why a chain cannot fracture under the full load from a direction, or null when it can
- * (DOMAIN §4: every hole not in the chain must lie strictly on the far side of the fracture line;
+ * (cli/docs/method.md §4: every hole not in the chain must lie strictly on the far side of the fracture line;
  * a hole exactly on the line belongs to a different chain).
  *
  * @param chain - the chain (only its hole ids are used)

@@ -4,7 +4,7 @@ import { edgeMinimum } from './detailingFindingsEdgeMinimum.js';
 import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js';
 
 /**
- * Detailing findings a checker also looks at (DOMAIN §7):
+ * Detailing findings a checker also looks at (cli/docs/method.md §7):
  * - LG201: centre-to-centre spacing below 2-2/3 d (AISC 360 J3.3), d the larger bolt of the pair;
  * - LG202: edge distance across the load (y to each longitudinal edge) below AISC 360 Table J3.4 /
  *   J3.4M plus the Table J3.5 increment C2 for oversized and slotted holes (a slot along the load is

@@ -16,7 +16,7 @@ export interface EnumerateOptions {
 
 /**
  * Every chain of a layout, by brute force: for each gauge line, no hole or one of its holes
- * (DOMAIN §4: Π(holes per line + 1) − 1 chains). For small patterns and for checking the fast search
+ * (cli/docs/method.md §4: Π(holes per line + 1) − 1 chains). For small patterns and for checking the fast search
  * ({@link leastChains}); it refuses layouts whose count exceeds `limit`.
  *
  * @param layout - the holes and plate

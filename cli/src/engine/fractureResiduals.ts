@@ -8,7 +8,7 @@ export function directionSign(direction: LoadDirection): 1 | -1 {
 
 /**
  * Signed distance along the load from a chain's fracture line to every hole, for direction `-x`
- * after x is multiplied by `sign` (DOMAIN §3–4): the line runs straight across at the first hole's x
+ * after x is multiplied by `sign` (cli/docs/method.md §3–4): the line runs straight across at the first hole's x
  * from y = 0, hole to hole, and straight at the last hole's x to y = width. Positive: the far side;
  * negative: the loaded side; NaN for the chain's own holes. A hole on a chain hole's gauge line is
  * judged against that hole's x; one between two chain holes against the leg joining them.

@@ -6,7 +6,7 @@ import type { FractureSides, HoleLayout, LoadDirection } from './types.js';
 
 /**
  * Sorts every hole not in a chain by the side of the chain's fracture line it lies on, for a load
- * direction (DOMAIN §4). Under `-x` the loaded side is the −x side. "Exactly on the line" means
+ * direction (cli/docs/method.md §4). Under `-x` the loaded side is the −x side. "Exactly on the line" means
  * within {@link layoutTolerance}.
  *
  * @param chain - the chain (only its hole ids are used)

@@ -13,7 +13,7 @@ export interface GaugeLines {
 
 /**
  * Groups the holes of a layout into gauge lines: holes whose y differ by no more than
- * {@link layoutTolerance} share a line (DOMAIN §1: holes on the same y form a gauge line).
+ * {@link layoutTolerance} share a line (cli/docs/method.md §1: holes on the same y form a gauge line).
  *
  * @param layout - the holes and plate
  * @returns the sort order, each hole's line number and the holes of each line

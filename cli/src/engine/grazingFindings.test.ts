@@ -89,7 +89,7 @@ describe('grazingFindings on plates (LG203)', () => {
 });
 
 describe('grazingFindings on sections (LG203, measured on the unfolded section)', () => {
-  // Chains from -x, by hand (DOMAIN §4): B shares F's gauge line, so any chain through B has F
+  // Chains from -x, by hand (cli/docs/method.md §4): B shares F's gauge line, so any chain through B has F
   // (x 0 < xB) on its loaded side; {A} has F on its loaded side. {F}: An = 3.75 − 0.4375 = 3.3125;
   // {F, A}: 3.75 − 2(0.4375) + (3²/(4·3.5))·0.5 = 3.75 − 0.875 + 0.3214 = 3.1964 in², governs.
   // Its leg runs from F (x 0, w 0) to A (x 3, w 3.5) in the developed plane across the heel (w along

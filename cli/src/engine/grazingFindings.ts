@@ -8,7 +8,7 @@ import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js
 
 /**
  * Distance from each hole to a plate chain's fracture line: straight across at the first hole's x
- * from y = 0, hole to hole, straight at the last hole's x to y = width (DOMAIN §3). A segment whose
+ * from y = 0, hole to hole, straight at the last hole's x to y = width (cli/docs/method.md §3). A segment whose
  * y-span stays a radius clear of a hole cannot graze it and is skipped (the hole then reads +∞).
  */
 function plateLineDistances(

@@ -25,7 +25,7 @@ function fmt(value: number): string {
 }
 
 /**
- * Problems with a member's hole layout that make the calc file invalid (DOMAIN §7): a hole whose
+ * Problems with a member's hole layout that make the calc file invalid (cli/docs/method.md §7): a hole whose
  * centre lies outside 0 ≤ y ≤ width or whose outline reaches past a longitudinal edge (LG301), two
  * holes whose outlines intersect (LG302), two holes with one id (LG303). Outlines use the nominal hole
  * dimensions (without the damage allowance): from the hole table when `profile` is given, else the

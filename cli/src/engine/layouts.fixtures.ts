@@ -2,7 +2,7 @@
 import type { HoleLayout } from './types.js';
 
 /**
- * AISC Design Examples v13.0, Example D.9 (REFERENCES R1): PL 14 × 1/2 in, 3/4 in bolts, hole width
+ * AISC Design Examples v13.0, Example D.9 (conformance/SOURCES.md R1): PL 14 × 1/2 in, 3/4 in bolts, hole width
  * for net area 0.875 in. Gauge lines at y = 2, 5, 9, 12 in (derived from the published path terms and
  * symmetry); the two inner holes 2.5 in further along than the outer ones.
  */

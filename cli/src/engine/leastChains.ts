@@ -24,7 +24,7 @@ function insertBounded(list: PartialPath[], path: PartialPath, k: number): void 
 }
 
 /**
- * The k least chains of a layout, without listing all chains (DOMAIN §4). Holes sorted by y form a
+ * The k least chains of a layout, without listing all chains (cli/docs/method.md §4). Holes sorted by y form a
  * DAG from the y = 0 edge to the y = width edge, with an edge i → j for every pair on increasing gauge
  * lines, weighted −(deducted width of j) + s²/4g; the net width of a path is the plate width plus its
  * weight. For a load direction only admissible legs are kept: the fracture line's admissibility is

@@ -7,7 +7,7 @@ const hole = (extra: Partial<HoleInput>): HoleInput => ({ id: 'H', x: 0, y: 50, 
 const p = (standard: CodeProfile['standard']): CodeProfile => ({ standard, method: 'LRFD', units: 'mm' });
 
 describe('memberHoleWidth', () => {
-  it('AISC 360: Table J3.3M standard hole + 2 mm (M20: 22 + 2 = 24 mm, REFERENCES J3.3M)', () => {
+  it('AISC 360: Table J3.3M standard hole + 2 mm (M20: 22 + 2 = 24 mm, conformance/SOURCES.md, Tables)', () => {
     expect(memberHoleWidth(hole({ boltDiameter: 20 }), p('AISC 360-22')).deducted).toBe(24);
   });
 
@@ -20,7 +20,7 @@ describe('memberHoleWidth', () => {
     });
   });
 
-  it('CSA S16: an explicit 22 mm punched hole + 2 mm = 24 mm (Holtz T10, REFERENCES R3)', () => {
+  it('CSA S16: an explicit 22 mm punched hole + 2 mm = 24 mm (Holtz T10, conformance/SOURCES.md R3)', () => {
     expect(memberHoleWidth(hole({ dimension: { across: 22, along: 22 } }), p('CSA S16-19'))).toMatchObject({
       nominalAcross: 22,
       allowance: 2,

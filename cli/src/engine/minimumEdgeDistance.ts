@@ -1,7 +1,7 @@
 import type { UnitSystem } from './types.js';
 
 // AISC 360-16 Table J3.4, Minimum Edge Distance from Center of Standard Hole to Edge of Connected
-// Part, in: published (as listed in REFERENCES.md). The 2022 edition keeps it; it is the 2010
+// Part, in: published (as listed in conformance/SOURCES.md). The 2022 edition keeps it; it is the 2010
 // edition's column "at rolled edges of plates, shapes or bars, or thermally cut edges" (from memory).
 // AISC 360-10 had a second, larger column for sheared edges (SHEARED_2010 below, from memory).
 const INCH: readonly (readonly [number, number])[] = [

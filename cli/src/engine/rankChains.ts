@@ -4,7 +4,7 @@ import type { HoleLayout, LoadDirection, RankedChain, ChainRejection } from './t
 
 /**
  * The k least chains over all chains, whether or not they can form, each with the directions in which
- * it can form under the full load and why not in the others (DOMAIN §4). For explaining a result:
+ * it can form under the full load and why not in the others (cli/docs/method.md §4). For explaining a result:
  * the least chains that are not admissible show which fastener holds them back.
  *
  * @param layout - the holes and plate

@@ -5,7 +5,7 @@ import { edgeMinimum } from './detailingFindingsEdgeMinimum.js';
 import type { CodeProfile, Finding, MemberInput, MemberResult } from './types.js';
 
 /**
- * AISC 360 detailing of a section member, measured within each element (DOMAIN §7): LG201 spacing
+ * AISC 360 detailing of a section member, measured within each element (cli/docs/method.md §7): LG201 spacing
  * below 2-2/3 d (J3.3) between holes of one element, LG202 edge distance below Table J3.4 / J3.4M
  * (+ C2 of Table J3.5 for oversized and slotted holes; AISC 360-10's sheared-edge value in the message)
  * measured to the element's free edges only (an angle's toe, a flange's tips; an angle's heel and a

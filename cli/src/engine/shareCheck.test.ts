@@ -14,7 +14,7 @@ const hole = (id: string, x: number, y: number, deducted = 1): PlacedHole => ({
   deducted,
 });
 
-// Hand-made (DOMAIN §4 equal-share rule): plate 10 × 1, holes 1.0 wide.
+// Hand-made (cli/docs/method.md §4 equal-share rule): plate 10 × 1, holes 1.0 wide.
 const triangle: HoleLayout = {
   width: 10,
   thickness: 1,

@@ -46,7 +46,7 @@ function lowerBound(sorted: Float64Array, value: number, length: number): number
 }
 
 /**
- * Equal-share check (DOMAIN §4): with every fastener taking an equal share of the load, a chain
+ * Equal-share check (cli/docs/method.md §4): with every fastener taking an equal share of the load, a chain
  * carries the share of the fasteners in it or on its far side (holes exactly on the fracture line
  * count as carried), and the chain with the least netArea / share over ALL chains is the one to
  * compare with the full-load net area. The number of fasteners left on the loaded side is a sum over

@@ -15,7 +15,7 @@ describe('tensionProfileOf', () => {
     });
   });
 
-  it('gives CSA S16-19 with φ 0.90 and φu 0.75 (REFERENCES R3)', () => {
+  it('gives CSA S16-19 with φ 0.90 and φu 0.75 (conformance/SOURCES.md R3)', () => {
     const p = tensionProfileOf({ standard: 'CSA S16-19', method: 'LRFD', units: 'mm' })!;
     expect(p.standard).toBe('CSA S16-19');
     // Holtz T10 main plate: Tr = 0.9 · 7500 · 350 = 2362 kN gross (published, rounded down from 2362.5).

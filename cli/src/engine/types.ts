@@ -211,7 +211,7 @@ export interface RankedChain extends Chain {
   readonly rejections: readonly ChainRejection[];
 }
 
-/** Equal-share check (DOMAIN §4): each fastener takes an equal share of the load. */
+/** Equal-share check (cli/docs/method.md §4): each fastener takes an equal share of the load. */
 export interface ShareCheck {
   readonly direction: LoadDirection;
   /** Chain with the least An / share over all chains. */

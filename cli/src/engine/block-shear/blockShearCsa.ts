@@ -13,7 +13,7 @@ export interface BlockShearCsaInput {
    * 0.3 for coped beams with two lines of bolts. The caller must give it.
    */
   readonly Ut: number;
-  /** φu, default 0.75 (CSA S16, as in REFERENCES R3). */
+  /** φu, default 0.75 (CSA S16, as in conformance/SOURCES.md R3). */
   readonly phiU?: number;
   /**
    * Edition of CSA S16, for the yield stress above which Fy replaces (Fy + Fu)/2 in the shear term:

@@ -3,7 +3,7 @@ import type { ProfileHoleInput, ProfileHoleWidth } from './types.js';
 
 /**
  * Width CSA S16 deducts for a hole: the hole diameter plus 2 mm (12.3.2; published in N. Holtz's
- * CSA S16 course notes, REFERENCES R3: 22 mm punched holes deduct 24 mm). Without an explicit hole
+ * CSA S16 course notes, conformance/SOURCES.md R3: 22 mm punched holes deduct 24 mm). Without an explicit hole
  * diameter the hole is taken as bolt + 2 mm — from memory of S16's standard hole, confirm before use.
  *
  * @param hole - an explicit hole diameter, or a bolt diameter

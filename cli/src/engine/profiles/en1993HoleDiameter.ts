@@ -1,7 +1,7 @@
 import { ProfileError } from './profileError.js';
 
 /**
- * Hole diameter d0 for a bolt in a normal round clearance hole, EN 1090-2 (as REFERENCES.md restates
+ * Hole diameter d0 for a bolt in a normal round clearance hole, EN 1090-2 (as conformance/SOURCES.md restates
  * it from a national code text): clearance 1 mm for M12 and M14, 2 mm for M16 to M24, 3 mm for M27 and
  * larger. Oversized and slotted holes are not offered: their clearances were not found in a source
  * we could cite, so the calc file must give their dimensions explicitly.

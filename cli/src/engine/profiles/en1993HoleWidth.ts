@@ -4,7 +4,7 @@ import type { ProfileHoleInput, ProfileHoleWidth } from './types.js';
 
 /**
  * Width EN 1993-1-1 deducts for a hole: the hole diameter d0 itself, with no damage allowance
- * (6.2.2.2; DOMAIN §2). d0 from the bolt by EN 1090-2 normal clearance, or as given.
+ * (6.2.2.2; cli/docs/method.md §2). d0 from the bolt by EN 1090-2 normal clearance, or as given.
  *
  * @param hole - bolt diameter or an explicit hole diameter
  * @returns d0 deducted, allowance 0

@@ -11,7 +11,7 @@ export interface En1993Deduction {
 /**
  * Net area by EN 1993-1-1 6.2.2.2: the gross area less the LARGER of the deduction for a straight
  * fracture line, t·Σd0, and the deduction for a staggered one, t(n·d0 − Σ s²/4p), over every line
- * given. Taking the largest deduction is the same as taking the least chain (DOMAIN §3).
+ * given. Taking the largest deduction is the same as taking the least chain (cli/docs/method.md §3).
  *
  * @param A - gross area, mm²
  * @param t - thickness, mm

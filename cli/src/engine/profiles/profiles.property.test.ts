@@ -7,8 +7,8 @@ import type { LoadDirection } from '../types.js';
 import { EN_1993_1_1 } from './en1993Profile.js';
 import { en1993SectionNetArea } from './en1993SectionNetArea.js';
 
-// AISC 360 Table J3.3M standard holes for M16, M20, M22 (REFERENCES Tables, published: 18, 22, 24 mm)
-// plus the 2 mm damage allowance of B4.3b (DOMAIN §2). EN 1090-2 normal clearance gives the same d0.
+// AISC 360 Table J3.3M standard holes for M16, M20, M22 (conformance/SOURCES.md, Tables, published: 18, 22, 24 mm)
+// plus the 2 mm damage allowance of B4.3b (cli/docs/method.md §2). EN 1090-2 normal clearance gives the same d0.
 const AISC_STANDARD_HOLE: Record<number, number> = { 16: 18, 20: 22, 22: 24 };
 
 describe('EN 1993-1-1 vs AISC 360 on the same plate', () => {

@@ -18,7 +18,7 @@ import { holeSpacings } from './holeSpacings.js';
 import { ProfileError } from './profileError.js';
 
 describe('EN 1993-1-1 profile', () => {
-  it('sizes d0 by EN 1090-2 normal clearance: 1 mm M12–M14, 2 mm M16–M24, 3 mm M27 and up (REFERENCES Tables)', () => {
+  it('sizes d0 by EN 1090-2 normal clearance: 1 mm M12–M14, 2 mm M16–M24, 3 mm M27 and up (conformance/SOURCES.md, Tables)', () => {
     expect([12, 14, 16, 20, 24, 27, 30, 36].map(en1993HoleDiameter)).toEqual([
       13, 15, 18, 22, 26, 30, 33, 39,
     ]);

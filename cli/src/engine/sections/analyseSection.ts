@@ -17,7 +17,7 @@ export interface AnalyseSectionOptions {
 
 /**
  * Net section of a member made of flat elements: unfolds it, finds the k least admissible chains per
- * load direction by net area, and takes An = min(least chain, Ag) per direction (DOMAIN §3–4) and
+ * load direction by net area, and takes An = min(least chain, Ag) per direction (cli/docs/method.md §3–4) and
  * over directions. Shear lag, strengths and block shear are separate steps (../shear-lag,
  * ../profiles, ../block-shear).
  *

@@ -5,12 +5,12 @@ import type { SectionLayout } from './types.js';
  * Which holes of a chain are joined by a gauge space (a leg), as pairs of positions in
  * `layout.holes`. Two chain holes are neighbours when no other chain hole lies on the centreline path
  * between them. Along a line of elements (plates, angles, channels) that gives the consecutive holes,
- * as on a plate (DOMAIN §3). Where a web meets a flange's middle with chain holes on both sides of the
+ * as on a plate (cli/docs/method.md §3). Where a web meets a flange's middle with chain holes on both sides of the
  * web and in the web, the three are all neighbours: the flange's own leg is kept, and the web's hole
  * is joined to whichever flange hole gives the smaller s²/4g (the lesser net area; the conservative
  * reading of the fracture continuing from the flange into the web). This reproduces the single
  * junction term per flange of T. B. Quimby, *A Beginner's Guide to the Steel Construction Manual*,
- * failure-path tutorial Example 3 (REFERENCES R5).
+ * failure-path tutorial Example 3 (conformance/SOURCES.md R5).
  *
  * @param layout - the unfolded section
  * @param chain - positions of the chain's holes in `layout.holes`

@@ -7,7 +7,7 @@ import type { SectionChain, SectionLayout, SectionLeg } from './types.js';
  * Net area of one chain of holes across a section, in AREA because thicknesses differ:
  * An = Ag − Σ(hole width × its element's thickness) + Σ(s²/4g × thickness of the element the leg lies
  * in), all × pieces. A leg across a junction takes the thinner thickness (README.md); with the web
- * thickness at the two web-to-flange legs this gives Quimby's Example 3, An = 16.86 in² (REFERENCES R5).
+ * thickness at the two web-to-flange legs this gives Quimby's Example 3, An = 16.86 in² (conformance/SOURCES.md R5).
  *
  * @param layout - the unfolded section
  * @param chain - positions of the chain's holes in `layout.holes`, any order, at most one per gauge line

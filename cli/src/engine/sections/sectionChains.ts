@@ -16,7 +16,7 @@ export interface SectionChainsOptions {
  * The k least chains of an unfolded section by net AREA (thicknesses differ between elements), kept
  * only when they can fracture under the full load from `direction` (null: all chains). Every chain is
  * visited: for each gauge line (holes of one element at one centreline position) no hole or one of its
- * holes, Π(holes per line + 1) − 1 chains (DOMAIN §4). The plate engine's y-ordered shortest-path
+ * holes, Π(holes per line + 1) − 1 chains (cli/docs/method.md §4). The plate engine's y-ordered shortest-path
  * search does not carry over to tees and W-shapes, whose elements branch; sections rarely have more
  * than a few gauge lines, and layouts above `limit` are refused rather than searched slowly.
  *

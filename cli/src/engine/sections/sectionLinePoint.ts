@@ -37,7 +37,7 @@ export function legProjection(layout: SectionLayout, a: number, b: number, p: nu
 }
 
 /**
- * The part of a section chain's fracture line a hole is judged against (DOMAIN §4, README.md §6): the
+ * The part of a section chain's fracture line a hole is judged against (cli/docs/method.md §4, README.md §6): the
  * nearest leg (on a tie, a leg inside the hole's own element), and the line's x where the hole meets
  * it. Beyond the end holes and along elements the chain does not enter the line runs straight across
  * from where it leaves the legs, so a hole there is judged against that point's x. A chain of one

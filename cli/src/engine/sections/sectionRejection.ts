@@ -4,13 +4,13 @@ import type { LoadDirection } from '../types.js';
 import type { SectionChainRejection, SectionLayout } from './types.js';
 
 /**
- * Whether a chain can fracture under the full load from a direction (DOMAIN §4): every hole not in the
+ * Whether a chain can fracture under the full load from a direction (cli/docs/method.md §4): every hole not in the
  * chain must lie strictly on the far side of the fracture line (+x side for `-x`). The line runs
  * between the chain's holes along each leg's centreline path, x varying linearly with the distance
  * along it, and straight across (constant x) from the end holes to the free edges and along any
  * element the chain does not enter, from where it leaves the chain's legs. A hole is judged against
  * the nearest part of the line (on a tie, a leg inside the hole's own element); this is the plate rule
- * of DOMAIN §4 when the section is one element.
+ * of cli/docs/method.md §4 when the section is one element.
  *
  * @param layout - the unfolded section
  * @param chain - positions of the chain's holes in `layout.holes`

@@ -1,4 +1,4 @@
-// Test fixtures built from published examples (see REFERENCES.md R4–R7). Geometry not printed in a
+// Test fixtures built from published examples (see conformance/SOURCES.md R4–R7). Geometry not printed in a
 // source is marked "derived" where it follows from published numbers, "placed" where the published
 // value does not depend on it.
 import { angle } from './angle.js';

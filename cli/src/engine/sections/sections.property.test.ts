@@ -16,7 +16,7 @@ interface PlateHole {
 }
 
 /**
- * An independent plate reference written straight from DOMAIN §3–4 (brute force over one hole or
+ * An independent plate reference written straight from cli/docs/method.md §3–4 (brute force over one hole or
  * none per gauge line, holes in y order, line straight to the edges, every other hole strictly on the
  * far side): least net area of a plate for a direction, or Ag when no chain can form.
  */
@@ -74,7 +74,7 @@ const plateCase = fc.record({
 });
 
 describe('section search properties', () => {
-  it('a one-element section gives the plain plate result (DOMAIN §3–4 brute force)', () => {
+  it('a one-element section gives the plain plate result (cli/docs/method.md §3–4 brute force)', () => {
     fc.assert(
       fc.property(plateCase, ({ holes, direction }) => {
         const plate = holes.map(([x, y], i) => ({ id: `h${i}`, x: x * 1.5, y: y * 2 }));

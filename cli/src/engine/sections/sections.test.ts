@@ -119,7 +119,7 @@ describe('published section net areas', () => {
   });
 });
 
-describe('admissibility across junctions (DOMAIN §4)', () => {
+describe('admissibility across junctions (cli/docs/method.md §4)', () => {
   const lay = unfold(angle(4, 4, 0.5), [
     { id: 'A', element: 'leg-a', x: 0, gauge: 2.5, deducted: 0.875 },
     { id: 'B', element: 'leg-b', x: 3, gauge: 2.5, deducted: 0.875 },

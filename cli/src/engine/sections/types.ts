@@ -150,7 +150,7 @@ export interface SectionChain {
   readonly netArea: number;
 }
 
-/** Why a section chain cannot fracture under the full load from a direction (DOMAIN §4). */
+/** Why a section chain cannot fracture under the full load from a direction (cli/docs/method.md §4). */
 export interface SectionChainRejection {
   readonly direction: LoadDirection;
   readonly blockingHole: string;
