@@ -5,7 +5,8 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { CLI_ROOT, EXAMPLES, tempDir } from './helpers.js';
 
 // The packed tarball must install globally and run with Node alone: compiled JS with its shebang,
-// the schemas bundled, only runtime dependencies. Installs offline from the npm cache.
+// the schemas bundled, only runtime dependencies. Installs from the npm cache where it has the
+// packages (npm ci leaves their tarballs there, not their registry metadata), else the registry.
 const dir = tempDir('ligament-pack-');
 afterAll(() => dir.remove());
 
@@ -35,7 +36,7 @@ describe('npm pack', () => {
           '-g',
           '--prefix',
           prefix,
-          '--offline',
+          '--prefer-offline',
           '--no-audit',
           '--no-fund',
           join(dir.path, filename),

@@ -68,6 +68,15 @@ function cleanPath(first: string): string {
   return [first, ...rest].join(delimiter);
 }
 
+/** The parent's proxy and certificate settings: without them npm cannot reach the registry on some networks. */
+function networkEnv(): Record<string, string> {
+  const keep =
+    /^(https?_proxy|no_proxy|node_extra_ca_certs|ssl_cert_file|ssl_cert_dir|npm_config_(cafile|registry|https?_proxy|noproxy|strict_ssl))$/i;
+  return Object.fromEntries(
+    Object.entries(process.env).filter((e): e is [string, string] => keep.test(e[0]) && e[1] !== undefined),
+  );
+}
+
 function sh(command: string, cwd: string, env: Record<string, string>) {
   return new Promise<{ code: number | null; stdout: string; stderr: string }>((resolve) => {
     // A command that hangs fails with its output instead of holding the run (not a timed assertion).
@@ -153,6 +162,8 @@ describe('the commands in README.md and cli/README.md', () => {
       const env = {
         PATH: cleanPath(join(prefix, 'bin')),
         HOME: process.env['HOME'] ?? calcRepo.path,
+        // How this machine reaches the registry (a proxy, its certificate authority) stays as it is.
+        ...networkEnv(),
         npm_config_prefix: prefix,
         // The tarball's dependencies come from the npm cache where it has them, else the registry.
         npm_config_prefer_offline: 'true',
