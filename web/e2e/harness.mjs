@@ -103,12 +103,34 @@ export async function launchBrowser() {
   };
 }
 
-/** Steps run in order; a failed step is reported and the rest still run unless they depend on it. */
-export function createRunner() {
+/** A file-name-safe form of a step's name. */
+const slug = (name) =>
+  name
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '')
+    .slice(0, 60);
+
+/**
+ * Steps run in order; a failed step is reported and the rest still run unless they depend on it.
+ * On a failure, `onFailure(fileStem)` is awaited so the run can keep what the page showed
+ * (`failed-NN-<step>.png` and `.html` in e2e/artifacts/).
+ */
+export function createRunner({ onFailure } = {}) {
   let passed = 0;
   let failed = 0;
   const failures = [];
   mkdirSync(artifacts, { recursive: true });
+  const keep = async (name) => {
+    if (!onFailure) return '';
+    const stem = `failed-${String(failures.length).padStart(2, '0')}-${slug(name)}`;
+    try {
+      await onFailure(stem);
+      return `\n    kept e2e/artifacts/${stem}.png and .html`;
+    } catch (error) {
+      return `\n    (could not keep the page: ${error?.message ?? error})`;
+    }
+  };
   return {
     async step(name, fn) {
       const started = Date.now();
@@ -120,11 +142,12 @@ export function createRunner() {
       } catch (error) {
         failed += 1;
         failures.push({ name, error });
+        const kept = await keep(name);
         console.log(
           `  ✗ ${name}\n    ${String(error?.stack ?? error)
             .split('\n')
             .slice(0, 6)
-            .join('\n    ')}`,
+            .join('\n    ')}${kept}`,
         );
         return false;
       }
