@@ -145,7 +145,7 @@ describe('--format markdown', () => {
       'schema/examples/deck-gusset-overstated.json',
     ]);
     const md = r.stdout;
-    expect(md).toContain('## Ligament check: findings to resolve');
+    expect(md).toContain('## Ligament check: 6 findings to resolve (--fail-on overstated)');
     expect(md).toContain('| File | Member | Governing chain | An | Available strength | Findings |');
     expect(md).toMatch(
       /\| `schema\/examples\/north-splice-correct\.json` \| SP-N1 \| -x A1–B1–C1–D1<br>\+x A1–B1–C1–D1 \| 5\.771 in² \|/,

@@ -11,6 +11,7 @@ import {
   fmtArea,
   fmtForce,
   isFailing,
+  plural,
   position,
   strengthSymbol,
   totalsLine,
@@ -28,16 +29,35 @@ function code(text: string): string {
   return '`' + text.replace(/`/g, "'") + '`';
 }
 
+/**
+ * The verdict in the heading, from the findings and `--fail-on` (never "passed" over a list of
+ * errors): files that could not be checked; findings at or above `--fail-on`; errors let through
+ * by `--fail-on none`; else passed, naming the warnings and notes that remain.
+ *
+ * @example
+ * headline(report) // → 'passed with 2 warnings', '3 errors, not failing (--fail-on none)'
+ */
+export function headline(report: RunReport): string {
+  const s = report.summary;
+  if (report.exitCode === 2) return 'could not check every file';
+  if (report.command === 'validate') return 'every file valid';
+  if (report.exitCode === 1) {
+    return `${plural(s.failing, 'finding')} to resolve (--fail-on ${report.settings.failOn})`;
+  }
+  const { error, warning, note } = s.findings;
+  if (error > 0) {
+    const also = warning > 0 ? ` and ${plural(warning, 'warning')}` : '';
+    return `${plural(error, 'error')}${also}, not failing (--fail-on ${report.settings.failOn})`;
+  }
+  if (warning > 0) return `passed with ${plural(warning, 'warning')}`;
+  if (note > 0) return `passed with ${plural(note, 'note')}`;
+  return 'passed';
+}
+
 /** Formats a run as Markdown. */
 export function formatMarkdown(report: RunReport): string {
   const lines: string[] = [];
-  const verdict =
-    report.exitCode === 2
-      ? 'could not check every file'
-      : report.exitCode === 1
-        ? 'findings to resolve'
-        : 'passed';
-  lines.push(`## Ligament ${report.command}: ${verdict}`, '');
+  lines.push(`## Ligament ${report.command}: ${headline(report)}`, '');
   lines.push(`${totalsLine(report)} · fail on **${report.settings.failOn}** · exit ${report.exitCode}`, '');
 
   const rows: string[] = [];
