@@ -103,6 +103,26 @@ export async function launchBrowser() {
   };
 }
 
+/**
+ * Slows the page's CPU by `LIGAMENT_E2E_CPU_THROTTLE` (e.g. 4 or 6; unset or 1: full speed) through
+ * Chromium's `Emulation.setCPUThrottlingRate`, to bring out on a fast machine the races a loaded one
+ * shows: clicks on buttons that re-render, waits that pass on stale content, lists refetching.
+ * Returns the rate in force.
+ */
+export async function throttleCpu(context, page) {
+  const text = process.env.LIGAMENT_E2E_CPU_THROTTLE;
+  if (text === undefined || text === '') return 1;
+  const rate = Number(text);
+  if (!Number.isFinite(rate) || rate < 1 || rate > 20) {
+    throw new Error(`LIGAMENT_E2E_CPU_THROTTLE must be a number from 1 to 20, not ${JSON.stringify(text)}`);
+  }
+  if (rate > 1) {
+    const cdp = await context.newCDPSession(page);
+    await cdp.send('Emulation.setCPUThrottlingRate', { rate });
+  }
+  return rate;
+}
+
 /** A file-name-safe form of a step's name. */
 const slug = (name) =>
   name

@@ -4,7 +4,15 @@
 // every screen go to e2e/artifacts/, and a failed step leaves its page there as PNG and HTML.
 import { existsSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { artifacts, createRunner, launchBrowser, repoRoot, startServer, webRoot } from './harness.mjs';
+import {
+  artifacts,
+  createRunner,
+  launchBrowser,
+  repoRoot,
+  startServer,
+  throttleCpu,
+  webRoot,
+} from './harness.mjs';
 import { journeys } from './journeys/index.mjs';
 import { createSession } from './session.mjs';
 
@@ -19,7 +27,10 @@ for (const needed of [join(repoRoot, 'api', 'dist', 'main.js'), join(webRoot, 'd
 const server = await startServer();
 const browser = await launchBrowser();
 const page = browser.context.pages()[0] ?? (await browser.context.newPage());
-page.setDefaultTimeout(15_000);
+const throttle = await throttleCpu(browser.context, page);
+// A throttled page is that much slower at everything, so each wait may take that much longer; a
+// race shows up as a wrong or missing state, never as a longer wait.
+page.setDefaultTimeout(15_000 * throttle);
 const runner = createRunner({
   async onFailure(stem) {
     await page.screenshot({ path: join(artifacts, `${stem}.png`), fullPage: true, timeout: 5_000 });
@@ -30,7 +41,9 @@ const session = createSession(page, server);
 /** What one journey leaves for the next (the project and submittal it made). */
 const state = {};
 
-console.log(`Browser run against ${server.baseUrl}`);
+console.log(
+  `Browser run against ${server.baseUrl}${throttle > 1 ? ` with the page's CPU slowed ${throttle}×` : ''}`,
+);
 try {
   for (const [name, journey] of journeys) {
     console.log(`${name}`);
