@@ -138,7 +138,8 @@ function linkedRevision(data: Record<string, unknown>): number | undefined {
 export interface DiscrepancyDetailProps {
   readonly discrepancyId: number;
   readonly projectId: number;
-  readonly onClose: () => void;
+  /** Shows a close button; a modal drawer that has its own leaves it out. */
+  readonly onClose?: () => void;
   /** Consultants and checkers comment; other roles read. */
   readonly canComment: boolean;
 }
@@ -205,12 +206,14 @@ export function DiscrepancyDetail({ discrepancyId, projectId, onClose, canCommen
           <span className={styles.code}>{d.code}</span>
           <Text>{d.name}</Text>
         </div>
-        <Button
-          appearance="subtle"
-          icon={<DismissRegular />}
-          aria-label="Close the details"
-          onClick={onClose}
-        />
+        {onClose && (
+          <Button
+            appearance="subtle"
+            icon={<DismissRegular />}
+            aria-label="Close the details"
+            onClick={onClose}
+          />
+        )}
       </div>
       <div className={styles.badges}>
         <StatusBadge status={d.status} />

@@ -1,6 +1,8 @@
 import {
   Button,
   DrawerBody,
+  DrawerHeader,
+  DrawerHeaderTitle,
   Dropdown,
   Field,
   makeStyles,
@@ -10,7 +12,12 @@ import {
   Text,
   tokens,
 } from '@fluentui/react-components';
-import { ChevronLeftRegular, ChevronRightRegular, DocumentBulletListRegular } from '@fluentui/react-icons';
+import {
+  ChevronLeftRegular,
+  ChevronRightRegular,
+  DismissRegular,
+  DocumentBulletListRegular,
+} from '@fluentui/react-icons';
 import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
@@ -134,15 +141,16 @@ export function Component() {
   const project = projects.data?.find((p) => p.id === projectId);
 
   const open = activeId !== null && projectId !== undefined;
-  const detailPanel = open ? (
-    <DiscrepancyDetail
-      key={activeId}
-      discrepancyId={activeId}
-      projectId={projectId}
-      onClose={() => setActiveId(null)}
-      canComment={role === 'checker' || role === 'consultant'}
-    />
-  ) : null;
+  const detailPanel = (closable: boolean) =>
+    open ? (
+      <DiscrepancyDetail
+        key={activeId}
+        discrepancyId={activeId}
+        projectId={projectId}
+        {...(closable ? { onClose: () => setActiveId(null) } : {})}
+        canComment={role === 'checker' || role === 'consultant'}
+      />
+    ) : null;
 
   if (projects.isPending) return <LoadingState label="Loading your projects…" />;
   if (projects.isError) return <ErrorState error={projects.error} onRetry={() => void projects.refetch()} />;
@@ -271,7 +279,7 @@ export function Component() {
         </Section>
         {open && wide && (
           <aside className={styles.detail} aria-label="Discrepancy details" data-testid="discrepancy-aside">
-            <Section>{detailPanel}</Section>
+            <Section>{detailPanel(true)}</Section>
           </aside>
         )}
       </div>
@@ -285,7 +293,28 @@ export function Component() {
           }}
           aria-label="Discrepancy details"
         >
-          <DrawerBody className={styles.drawerBody}>{detailPanel}</DrawerBody>
+          {/*
+            The header's close button is there from the first frame, while the detail still loads: the
+            drawer's initial focus lands on it, inside the modal, and stays there when the detail
+            arrives. With nothing focusable at first, focus fell on the drawer's own surface, which the
+            focus trap (tabster's modalizer) does not count as inside, so now and then the drawer stayed
+            aria-hidden: its buttons were unreachable by role, to screen readers and to the browser run.
+          */}
+          <DrawerHeader>
+            <DrawerHeaderTitle
+              action={
+                <Button
+                  appearance="subtle"
+                  icon={<DismissRegular />}
+                  aria-label="Close the details"
+                  onClick={() => setActiveId(null)}
+                />
+              }
+            >
+              Discrepancy details
+            </DrawerHeaderTitle>
+          </DrawerHeader>
+          <DrawerBody className={styles.drawerBody}>{detailPanel(false)}</DrawerBody>
         </OverlayDrawer>
       )}
     </>
