@@ -158,6 +158,96 @@ describe('numbers no id or page can be', () => {
   });
 });
 
+describe('numbers in multipart bodies and query strings (text the DTO converts)', () => {
+  const submittals = async () =>
+    ((await request(t.http).get('/api/projects/1/submittals').set(bearer(admin))).body as unknown[]).length;
+  const safeIntegerError = (property: string, text: string) => ({
+    statusCode: 400,
+    error: 'Bad Request',
+    message: `${property} must be a whole number below 2^53, not ${text}`,
+    details: [
+      {
+        property,
+        constraints: { safeInteger: `${property} must be a whole number below 2^53, not ${text}` },
+      },
+    ],
+  });
+
+  it.each(['99999999999999999999', '1e20', '9007199254740993'])(
+    'a multipart revisionOf of %s: 400 naming revisionOf; nothing stored',
+    async (revisionOf) => {
+      const before = await submittals();
+      const res = await request(t.http)
+        .post('/api/projects/1/submittals')
+        .set(bearer(consultant))
+        .field('title', 'Revision with a huge number')
+        .field('revisionOf', revisionOf)
+        .attach('files', calcFile('SP-HUGE'), 'huge-revision.json');
+      expect(res.status).toBe(400);
+      expect(res.body).toEqual(safeIntegerError('revisionOf', revisionOf));
+      expect(await submittals()).toBe(before);
+    },
+  );
+
+  it('a multipart revisionOf that is not a number: 400 naming revisionOf', async () => {
+    const res = await request(t.http)
+      .post('/api/projects/1/submittals')
+      .set(bearer(consultant))
+      .field('title', 'Revision of nothing')
+      .field('revisionOf', 'B')
+      .attach('files', calcFile('SP-NAN'), 'nan-revision.json');
+    expect(res.status).toBe(400);
+    expect(res.body).toMatchObject({
+      statusCode: 400,
+      error: 'Bad Request',
+      details: [{ property: 'revisionOf', constraints: { isInt: 'revisionOf must be an integer number' } }],
+    });
+  });
+
+  it('a title of 20 digits is text, not a number: the upload goes through', async () => {
+    const res = await request(t.http)
+      .post('/api/projects/1/submittals')
+      .set(bearer(consultant))
+      .field('title', '99999999999999999999')
+      .attach('files', calcFile('SP-DIGITS'), 'digits-title.json');
+    expect(res.status).toBe(201);
+  });
+
+  it.each([
+    ['/api/projects/1/discrepancies?submittalId=1e20', 'submittalId', '1e20'],
+    ['/api/dashboard?projectId=1e20', 'projectId', '1e20'],
+    ['/api/dashboard/open-discrepancies.csv?projectId=1e20', 'projectId', '1e20'],
+  ])(
+    '%s: 400 naming %s, as JSON (also where the route answers CSV or HTML)',
+    async (path, property, text) => {
+      const res = await request(t.http).get(path).set(bearer(admin));
+      expect(res.status).toBe(400);
+      expect(res.headers['content-type']).toBe('application/json; charset=utf-8');
+      expect(res.headers['content-disposition']).toBeUndefined();
+      expect(res.body).toEqual(safeIntegerError(property, text));
+    },
+  );
+
+  it.each(['1e20', '99999999999999999999'])(
+    'the HTML report of submittal %s: 404 as JSON, naming the id as sent',
+    async (id) => {
+      const res = await request(t.http).get(`/api/submittals/${id}/report`).set(bearer(admin));
+      expect(res.status).toBe(404);
+      expect(res.headers['content-type']).toBe('application/json; charset=utf-8');
+      expect(res.body).toEqual({ statusCode: 404, error: 'Not Found', message: `No submittal ${id}.` });
+    },
+  );
+
+  it('a pageSize of 1e20: 400 naming pageSize (above its maximum)', async () => {
+    const res = await request(t.http).get('/api/projects/1/discrepancies?pageSize=1e20').set(bearer(admin));
+    expect(res.status).toBe(400);
+    expect(res.body).toMatchObject({
+      statusCode: 400,
+      details: [{ property: 'pageSize', constraints: { max: 'pageSize must not be greater than 500' } }],
+    });
+  });
+});
+
 describe('references to what does not exist', () => {
   it('PATCH /api/users/:id {"organisationId":999}: 404 and the user unchanged', async () => {
     const before = (await request(t.http).get('/api/users').set(bearer(admin))).body as {

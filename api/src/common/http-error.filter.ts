@@ -22,6 +22,10 @@ export class HttpErrorFilter implements ExceptionFilter {
     if (response.headersSent) return;
     if (exception instanceof TooManyRequestsException)
       response.setHeader('Retry-After', String(exception.retryAfterSeconds));
+    // A route that answers CSV or HTML sets its Content-Type (and a CSV's attachment name) before
+    // its pipes run; an error from those is still the JSON error shape, shown, not downloaded.
+    response.removeHeader('Content-Disposition');
+    response.setHeader('Content-Type', 'application/json; charset=utf-8');
     response.status(body.statusCode).json(body);
   }
 

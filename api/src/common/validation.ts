@@ -62,6 +62,37 @@ export function inputProblem(value: unknown, root: string, digitStrings: boolean
   return null;
 }
 
+/**
+ * After conversion: a whole number that is not a safe integer, found by walking the converted value
+ * beside the raw one, and reported with the text as it came (a multipart field or a query value of
+ * 20 digits, or "1e20", converts to 1e20, which no id or count can be). Multipart bodies are text
+ * like query strings, but only the DTO knows which of their fields are numbers, so this runs on what
+ * the DTO made of them.
+ */
+export function convertedProblem(converted: unknown, raw: unknown, root: string): Problem | null {
+  const stack: { value: unknown; raw: unknown; path: string }[] = [{ value: converted, raw, path: '' }];
+  while (stack.length > 0) {
+    const item = stack.pop()!;
+    const v = item.value;
+    if (typeof v === 'number' && Number.isInteger(v) && !Number.isSafeInteger(v)) {
+      const name = item.path || root;
+      const text = typeof item.raw === 'string' ? item.raw.trim() : String(v);
+      return {
+        property: name,
+        constraints: { safeInteger: `${name} must be a whole number below 2^53, not ${text}` },
+      };
+    }
+    if (v === null || typeof v !== 'object') continue;
+    const rawObject =
+      item.raw !== null && typeof item.raw === 'object' ? (item.raw as Record<string, unknown>) : {};
+    for (const [key, child] of Object.entries(v)) {
+      const path = Array.isArray(v) ? `${item.path}[${key}]` : item.path ? `${item.path}.${key}` : key;
+      stack.push({ value: child, raw: rawObject[key], path });
+    }
+  }
+  return null;
+}
+
 const ROOT_NAMES: Record<ArgumentMetadata['type'], string> = {
   body: 'the request body',
   query: 'the query',
@@ -83,7 +114,18 @@ class LigamentValidationPipe extends ValidationPipe {
         });
       }
     }
-    return super.transform(value, metadata);
+    const converted: unknown = await super.transform(value, metadata);
+    if (metadata.type !== 'custom') {
+      const root = metadata.type === 'param' && metadata.data ? metadata.data : ROOT_NAMES[metadata.type];
+      const problem = convertedProblem(converted, value, root);
+      if (problem) {
+        throw new BadRequestException({
+          message: Object.values(problem.constraints).join('; '),
+          details: [problem],
+        });
+      }
+    }
+    return converted;
   }
 }
 

@@ -31,7 +31,7 @@ export class ProjectAccessGuard implements CanActivate {
       .getRequest<{ user: AuthUser; params: Record<string, string>; projectId?: number }>();
     const raw = request.params[scope.param];
     const id = Number(raw);
-    if (!Number.isInteger(id) || id < 1) throw new NotFoundException(`No ${scope.kind} ${raw ?? ''}.`);
+    if (!Number.isSafeInteger(id) || id < 1) throw new NotFoundException(`No ${scope.kind} ${raw ?? ''}.`);
     const user = request.user;
     let projectId: number | null;
     let member: boolean;
