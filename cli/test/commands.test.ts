@@ -13,7 +13,7 @@ describe('ligament chains', () => {
     expect(r.exitCode).toBe(0);
     // R1 published net widths: zigzag 11.5 (controls), outer–inner–inner 11.9, straight 12.3 in.
     expect(r.stdout).toMatch(/1 {2}A1–B1–C1–D1 +4 +3\.500 +1\.042 +11\.542 +5\.771 {3}governs/);
-    expect(r.stdout).toMatch(/A1 → B1 {2}s 2\.500 {2}g 3\.000 {2}s²\/4g 0\.521/);
+    expect(r.stdout).toMatch(/A1 → B1 {2}s 2\.500 in {2}g 3\.000 in {2}s²\/4g 0\.521 in/);
     expect(r.stdout).toMatch(/A1–D1 +2 +1\.750 +0\.000 +12\.250/);
     expect(r.stdout).toMatch(/A1–B1–C1 +3 +2\.625 +0\.521 +11\.896/);
   });

@@ -366,7 +366,7 @@ describe('loadCalcText: messages in plain words', () => {
       ['zigzag.json', '/members/0/holes', 'net-area-positive'],
     ]);
     expect(errors[0]!.message).toBe(
-      '/members/0/holes: chain A-B-C-D loaded from −x leaves a net width of -0.27 in (width 2.50 in − holes 3.50 in + s²/4g 0.73 in); the holes take the whole width, so it is not a tension member (rule net-area-positive)',
+      '/members/0/holes: chain A-B-C-D loaded from −x leaves a net width of -0.265 in (width 2.500 in − holes 3.500 in + s²/4g 0.735 in); the holes take the whole width, so it is not a tension member (rule net-area-positive)',
     );
     const lines = text.split('\n');
     expect(lines[errors[0]!.line - 1]!.trim()).toBe('"holes": [');

@@ -1,4 +1,5 @@
 /** How dimensions read on the sketch: inches as fractions to 1/16, millimetres as whole numbers. */
+import { formatQuantity } from '../engine/formatQuantity.js';
 import type { UnitSystem } from '../engine/types.js';
 
 function gcd(a: number, b: number): number {
@@ -29,7 +30,7 @@ export function lengthLabel(value: number, units: UnitSystem): string {
   return whole === 0 ? (sixteenths < 0 ? `-${frac}` : frac) : `${whole} ${frac}`;
 }
 
-/** Net width with unit, e.g. `11.44 in` or `281 mm`. */
+/** Net width with unit at the file's precision (engine formatQuantity), e.g. `11.542 in` or `281.0 mm`. */
 export function netWidthLabel(value: number, units: UnitSystem): string {
-  return units === 'in' ? `${value.toFixed(3)} in` : `${value.toFixed(1)} mm`;
+  return formatQuantity(value, 'length', units);
 }

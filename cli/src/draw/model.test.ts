@@ -83,7 +83,7 @@ describe('buildDrawing', () => {
     for (const a of arrows) if (a.kind === 'arrow') expect(a.head[0]).toBeLessThan(a.tail[0]);
     const texts = drawing.shapes.flatMap((s) => (s.kind === 'text' ? [s.text] : []));
     expect(texts).toContain('D9 — plate');
-    expect(texts.some((t) => t.startsWith('PL 1/2 × 14 in · A36 (Fy 36 ksi, Fu 58 ksi)'))).toBe(true);
+    expect(texts.some((t) => t.startsWith('PL 1/2 × 14 in · A36 (Fy 36.0 ksi, Fu 58.0 ksi)'))).toBe(true);
     expect(texts).toContain('SCALE 1:5');
   });
 

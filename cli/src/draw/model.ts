@@ -1,4 +1,5 @@
 import type { CodeProfile, LoadDirection, MemberInput, MemberResult, UnitSystem } from '../engine/types.js';
+import { formatQuantity } from '../engine/formatQuantity.js';
 import { lengthLabel, netWidthLabel } from './labels.js';
 import { sectionStripShapes } from './sectionStrips.js';
 import type { DimensionShape, Drawing, FractureShape, Point, Shape, TextShape } from './types.js';
@@ -402,9 +403,6 @@ function titleBlock(
   scale: number,
 ): Shape[] {
   const u = options.units;
-  const area = u === 'in' ? 'in²' : 'mm²';
-  const force = u === 'in' ? 'kip' : 'kN';
-  const stress = u === 'in' ? 'ksi' : 'MPa';
   const x = sheetW - 9 - TITLE.width;
   const y = sheetH - 9 - 9 - TITLE.height;
   const shapes: Shape[] = [
@@ -432,7 +430,7 @@ function titleBlock(
   shapes.push(
     line(
       0,
-      `${['plate', 'splice-plate', 'gusset'].includes(member.kind) ? 'PL' : 'unfolded'} ${lengthLabel(member.thickness, u)} × ${lengthLabel(member.width, u)} ${u} · ${m.grade ?? 'steel'} (Fy ${m.Fy} ${stress}, Fu ${m.Fu} ${stress}) · ${member.holes.length} holes`,
+      `${['plate', 'splice-plate', 'gusset'].includes(member.kind) ? 'PL' : 'unfolded'} ${lengthLabel(member.thickness, u)} × ${lengthLabel(member.width, u)} ${u} · ${m.grade ?? 'steel'} (Fy ${formatQuantity(m.Fy, 'stress', u)}, Fu ${formatQuantity(m.Fu, 'stress', u)}) · ${member.holes.length} holes`,
     ),
   );
   const std = options.profile?.standard ?? '';
@@ -446,13 +444,13 @@ function titleBlock(
   shapes.push(
     line(
       1,
-      `Ag ${result.Ag.toFixed(u === 'in' ? 3 : 0)} ${area} · An ${result.An.toFixed(u === 'in' ? 3 : 0)} ${area} (${DIR_TEXT[result.governingDirection]}) · U ${result.U.toFixed(2)} · Ae ${result.Ae.toFixed(u === 'in' ? 3 : 0)} ${area}${result.capped ? ' (0.85 Ag)' : ''}`,
+      `Ag ${formatQuantity(result.Ag, 'area', u)} · An ${formatQuantity(result.An, 'area', u)} (${DIR_TEXT[result.governingDirection]}) · U ${formatQuantity(result.U, 'ratio', u)} · Ae ${formatQuantity(result.Ae, 'area', u)}${result.capped ? ' (0.85 Ag)' : ''}`,
     ),
   );
   shapes.push(
     line(
       2,
-      `${sym} ${result.governing.available.toFixed(1)} ${force} (${result.governing.limitState} governs)${blockShearNote(result, force)}${options.profile ? ` · ${options.profile.standard} ${options.profile.method}` : ''}`,
+      `${sym} ${formatQuantity(result.governing.available, 'force', u)} (${result.governing.limitState} governs)${blockShearNote(result, u)}${options.profile ? ` · ${options.profile.standard} ${options.profile.method}` : ''}`,
     ),
   );
   shapes.push(
@@ -473,8 +471,8 @@ function titleBlock(
 }
 
 /** Block shear is a connection limit state reported beside the member's: say so when it is lower. */
-function blockShearNote(result: MemberResult, force: string): string {
+function blockShearNote(result: MemberResult, units: UnitSystem): string {
   const bs = result.blockShear;
   if (!bs || bs.available >= result.governing.available) return '';
-  return ` · block shear ${bs.available.toFixed(1)} ${force} is lower`;
+  return ` · block shear ${formatQuantity(bs.available, 'force', units)} is lower`;
 }

@@ -58,7 +58,7 @@ describe('auditMember', () => {
       memberId: 'SP-1',
       claimed: 6.1,
       recomputed: expect.closeTo(5.7708, 4),
-      message: 'Claimed An 6.10 in² exceeds the recomputed 5.77 in² (chain A1-B1-C1-D1, −x) by 5.7 %',
+      message: 'Claimed An 6.100 in² exceeds the recomputed 5.771 in² (chain A1-B1-C1-D1, −x) by 5.7 %',
       pointer: '/members/0/claims/An',
     });
   });
@@ -108,7 +108,7 @@ describe('auditMember', () => {
       pointer: '/members/0/claims/chains',
     });
     expect(missed.message).toMatch(
-      /Governing chain A1-B1-C1-D1 for −x \(net width 11\.54 in, An 5\.77 in²\)/,
+      /Governing chain A1-B1-C1-D1 for −x \(net width 11\.542 in, An 5\.771 in²\)/,
     );
   });
 
@@ -210,7 +210,7 @@ describe('auditMember', () => {
       ['note', '/members/0/claims/chains/1/netWidth'],
     ]);
     expect(found[0]!.message).toBe(
-      'Claimed net width 12.00 in of chain A1-B1-C1-D1 exceeds the recomputed 11.54 in by 4.0 %',
+      'Claimed net width 12.000 in of chain A1-B1-C1-D1 exceeds the recomputed 11.542 in by 4.0 %',
     );
   });
 
@@ -261,7 +261,7 @@ describe('auditMember', () => {
     expect(found[0]!.recomputed).toBeCloseTo(9.075, 10);
     expect(found[0]!.claimed).toBeCloseTo(9.25, 10);
     expect(found[0]!.message).toBe(
-      'Equal-share check for −x: chain A0-B0 carries 10 of 11 fasteners; An/share 9.08 in² is below the full-load An 9.25 in²',
+      'Equal-share check for −x: chain A0-B0 carries 10 of 11 fasteners; An/share 9.075 in² is below the full-load An 9.250 in²',
     );
   });
 

@@ -84,7 +84,7 @@ describe('detailingFindings: Table J3.5 increments and the AISC 360-10 sheared-e
     expect(f).toHaveLength(1);
     expect(f[0]!.recomputed).toBeCloseTo(1.0625, 12);
     expect(f[0]!.message).toBe(
-      'Hole A is 1.00 in from the y = 0 edge, below the 1.06 in of AISC 360 Table J3.4 (1.00 in) + C2 0.06 in for an oversized hole (Table J3.5)',
+      'Hole A is 1.000 in from the y = 0 edge, below the 1.063 in of AISC 360 Table J3.4 (1.000 in) + C2 0.063 in for an oversized hole (Table J3.5)',
     );
   });
 
@@ -111,7 +111,7 @@ describe('detailingFindings: Table J3.5 increments and the AISC 360-10 sheared-e
     expect(lg202(holeAt(1, {}), IN10)).toEqual([]);
     const f = lg202(holeAt(0.875, {}), IN10);
     expect(f[0]!.message).toBe(
-      'Hole A is 0.88 in from the y = 0 edge, below the 1.00 in of AISC 360 Table J3.4, rolled or thermally cut edges; at a sheared edge AISC 360-10 asks 1.25 in (from memory)',
+      'Hole A is 0.875 in from the y = 0 edge, below the 1.000 in of AISC 360 Table J3.4, rolled or thermally cut edges; at a sheared edge AISC 360-10 asks 1.250 in (from memory)',
     );
   });
 });

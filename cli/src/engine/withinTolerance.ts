@@ -17,7 +17,7 @@ export const DEFAULT_TOLERANCE: ToleranceSpec = { relative: 0.005 };
  *
  * @param claimed - the submitted value
  * @param recomputed - the engine's value
- * @param dimension - what the value measures (ratios always compare relatively)
+ * @param dimension - what the value measures (ratios and stresses always compare relatively)
  * @param tolerance - the tolerance (default 0.5 %)
  * @returns true when the two agree
  * @example
@@ -31,7 +31,8 @@ export function withinTolerance(
   dimension: Dimension,
   tolerance: ToleranceSpec = DEFAULT_TOLERANCE,
 ): boolean {
-  const absolute = dimension === 'ratio' ? undefined : tolerance.absolute?.[dimension];
+  const absolute =
+    dimension === 'ratio' || dimension === 'stress' ? undefined : tolerance.absolute?.[dimension];
   const allowed = absolute ?? tolerance.relative * Math.abs(recomputed);
   return Math.abs(claimed - recomputed) <= allowed + 1e-12 * Math.max(1, Math.abs(recomputed));
 }

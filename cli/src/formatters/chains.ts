@@ -1,15 +1,22 @@
 /** Text and JSON for `ligament chains`. Pure. */
 import type { Chain, RankedChain } from '../engine/types.js';
 import type { ChainsReport } from '../runner/chains.js';
-import { UNIT_LABELS, chainLabel, columns, fmtArea, fmtLength } from './common.js';
+import { formatQuantity, unitSymbol, type Dimension } from '../engine/index.js';
+import type { UnitSystem } from '../engine/types.js';
+import { chainLabel, columns } from './common.js';
 
-function legLines(chain: Chain, units: 'in' | 'mm'): string[] {
+/** A value with its unit, or (in a column or list headed by the unit) without. */
+const q = (value: number, dimension: Dimension, units: UnitSystem) => formatQuantity(value, dimension, units);
+const n = (value: number, dimension: Dimension, units: UnitSystem) =>
+  formatQuantity(value, dimension, units, { unit: false });
+
+function legLines(chain: Chain, units: UnitSystem): string[] {
   if (chain.legs.length === 0) return [];
   const rows = chain.legs.map((l) => [
     `${l.from} → ${l.to}`,
-    `s ${fmtLength(l.s, units)}`,
-    `g ${fmtLength(l.g, units)}`,
-    `s²/4g ${fmtLength(l.term, units)}`,
+    `s ${q(l.s, 'length', units)}`,
+    `g ${q(l.g, 'length', units)}`,
+    `s²/4g ${q(l.term, 'length', units)}`,
   ]);
   return columns(rows, ['left', 'right', 'right', 'right']).map((l) => `        ${l}`);
 }
@@ -28,17 +35,16 @@ function blocked(c: RankedChain): string {
 /** The chains report as text. */
 export function formatChainsText(report: ChainsReport): string {
   const units = report.profile?.units ?? 'in';
-  const u = UNIT_LABELS[units];
   const m = report.member;
   if (!m) return '';
   const out: string[] = [];
   out.push(
-    `${report.file}  ${m.id}  PL ${fmtLength(m.thickness, units)} × ${fmtLength(m.width, units)} ${u.length}  ${m.holes.length} holes`,
+    `${report.file}  ${m.id}  PL ${n(m.thickness, 'length', units)} × ${q(m.width, 'length', units)}  ${m.holes.length} holes`,
   );
   if (report.holeWidths.length > 0) {
     out.push(
-      `  hole widths deducted (${u.length}): ` +
-        report.holeWidths.map((h) => `${h.holeId} ${fmtLength(h.deducted, units)}`).join('  '),
+      `  hole widths deducted (${unitSymbol('length', units)}): ` +
+        report.holeWidths.map((h) => `${h.holeId} ${n(h.deducted, 'length', units)}`).join('  '),
     );
   }
   for (const d of report.directions) {
@@ -47,16 +53,26 @@ export function formatChainsText(report: ChainsReport): string {
       `  direction ${d.direction}: ${d.least.length} least chain${d.least.length === 1 ? '' : 's'} that can form under the full load`,
     );
     if (d.least.length === 0) out.push('    none: no chain frees the loaded piece in this direction');
-    const rows = [['#', 'chain', 'holes', `Σ holes`, `Σ s²/4g`, `wn ${u.length}`, `An ${u.area}`]];
+    const rows = [
+      [
+        '#',
+        'chain',
+        'holes',
+        `Σ holes ${unitSymbol('length', units)}`,
+        `Σ s²/4g ${unitSymbol('length', units)}`,
+        `wn ${unitSymbol('length', units)}`,
+        `An ${unitSymbol('area', units)}`,
+      ],
+    ];
     d.least.forEach((c, i) =>
       rows.push([
         String(i + 1),
         chainLabel(c.holes),
         String(c.holes.length),
-        fmtLength(c.deducted, units),
-        fmtLength(c.staggerSum, units),
-        fmtLength(c.netWidth, units),
-        fmtArea(c.netArea, units),
+        n(c.deducted, 'length', units),
+        n(c.staggerSum, 'length', units),
+        n(c.netWidth, 'length', units),
+        n(c.netArea, 'area', units),
       ]),
     );
     const lines = columns(rows, ['right', 'left', 'right', 'right', 'right', 'right', 'right']);
@@ -72,7 +88,7 @@ export function formatChainsText(report: ChainsReport): string {
       '  least chains that cannot form in a direction asked for, and the hole that keeps each from forming:',
     );
     for (const c of report.rejected) {
-      out.push(`    ${chainLabel(c.holes)}  wn ${fmtLength(c.netWidth, units)} ${u.length}  ${blocked(c)}`);
+      out.push(`    ${chainLabel(c.holes)}  wn ${q(c.netWidth, 'length', units)}  ${blocked(c)}`);
       out.push(...legLines(c, units));
     }
   }

@@ -1,33 +1,6 @@
-/** Small pure helpers shared by the formatters: units, numbers, labels. */
+/** Small pure helpers shared by the formatters: labels, layout, totals (numbers: engine formatQuantity). */
 import type { CodeProfile, UnitSystem } from '../engine/types.js';
 import type { FileReport, RunReport } from '../runner/types.js';
-
-export interface UnitLabels {
-  readonly length: string;
-  readonly area: string;
-  readonly force: string;
-  readonly stress: string;
-}
-
-export const UNIT_LABELS: Record<UnitSystem, UnitLabels> = {
-  in: { length: 'in', area: 'in²', force: 'kip', stress: 'ksi' },
-  mm: { length: 'mm', area: 'mm²', force: 'kN', stress: 'MPa' },
-};
-
-/** Lengths: 3 decimals in inches, 1 in millimetres. */
-export function fmtLength(value: number, units: UnitSystem): string {
-  return value.toFixed(units === 'in' ? 3 : 1);
-}
-
-/** Areas: 3 decimals in in², whole mm². */
-export function fmtArea(value: number, units: UnitSystem): string {
-  return value.toFixed(units === 'in' ? 3 : 0);
-}
-
-/** Forces: one decimal (kip or kN). */
-export function fmtForce(value: number): string {
-  return value.toFixed(1);
-}
 
 /** A chain as text: hole ids joined by en dashes (hole ids may hold hyphens). */
 export function chainLabel(holes: readonly string[] | undefined): string {

@@ -4,18 +4,8 @@
  */
 import type { RunReport } from '../runner/types.js';
 import { CAUTION } from '../runner/types.js';
-import {
-  UNIT_LABELS,
-  chainLabel,
-  fileUnits,
-  fmtArea,
-  fmtForce,
-  isFailing,
-  plural,
-  position,
-  strengthSymbol,
-  totalsLine,
-} from './common.js';
+import { formatQuantity } from '../engine/index.js';
+import { chainLabel, fileUnits, isFailing, plural, position, strengthSymbol, totalsLine } from './common.js';
 
 /** Escapes text for a Markdown table cell or list item. */
 function md(text: string): string {
@@ -63,7 +53,6 @@ export function formatMarkdown(report: RunReport): string {
   const rows: string[] = [];
   for (const file of report.files) {
     const units = fileUnits(file);
-    const u = UNIT_LABELS[units];
     if (file.status === 'invalid') {
       rows.push(
         `| ${code(file.file)} | — | invalid: ${file.errors.length} input error${file.errors.length === 1 ? '' : 's'} | | | |`,
@@ -85,7 +74,7 @@ export function formatMarkdown(report: RunReport): string {
         .map(([s, n]) => `${n} ${s}${n === 1 ? '' : 's'}`)
         .join(', ');
       rows.push(
-        `| ${code(file.file)} | ${md(m.memberId)} | ${chains} | ${fmtArea(r.An, units)} ${u.area} | ${strengthSymbol(file.profile)} ${fmtForce(r.governing.available)} ${u.force} (${r.governing.limitState}) | ${counts || 'none'} |`,
+        `| ${code(file.file)} | ${md(m.memberId)} | ${chains} | ${formatQuantity(r.An, 'area', units)} | ${strengthSymbol(file.profile)} ${formatQuantity(r.governing.available, 'force', units)} (${r.governing.limitState}) | ${counts || 'none'} |`,
       );
     }
   }

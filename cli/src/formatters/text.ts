@@ -5,14 +5,11 @@
 import type { CalcError } from '../calc/types.js';
 import type { MemberReport, RunReport, FileReport, LocatedFinding } from '../runner/types.js';
 import { CAUTION } from '../runner/types.js';
+import { formatQuantity, unitSymbol, type Dimension } from '../engine/index.js';
 import {
-  UNIT_LABELS,
   chainLabel,
   columns,
   fileUnits,
-  fmtArea,
-  fmtForce,
-  fmtLength,
   isFailing,
   position,
   strengthSymbol,
@@ -61,47 +58,55 @@ export function errorLine(e: CalcError, paint: Paint = NO_PAINT): string {
 
 function memberBlock(file: FileReport, m: MemberReport, report: RunReport, paint: Paint): string[] {
   const units = fileUnits(file);
-  const u = UNIT_LABELS[units];
+  /** A value with its unit, and (in a column headed by the unit) without. */
+  const q = (value: number, dimension: Dimension) => formatQuantity(value, dimension, units);
+  const n = (value: number, dimension: Dimension) => formatQuantity(value, dimension, units, { unit: false });
   const r = m.result;
   const input = m.plate;
   const out: string[] = [];
   const grade = input.material.grade ? `  ${input.material.grade}` : '';
   out.push(
-    `  ${paint.bold(m.memberId)}  ${input.kind}  ${PLATE_KINDS.has(input.kind) ? 'PL' : 'unfolded'} ${fmtLength(input.thickness, units)} × ${fmtLength(input.width, units)} ${u.length}${grade}  ${input.holeCount} holes`,
+    `  ${paint.bold(m.memberId)}  ${input.kind}  ${PLATE_KINDS.has(input.kind) ? 'PL' : 'unfolded'} ${n(input.thickness, 'length')} × ${q(input.width, 'length')}${grade}  ${input.holeCount} holes`,
   );
-  const rows: string[][] = [['dir', 'governing chain', `wn ${u.length}`, `An ${u.area}`, 'equal share']];
+  const rows: string[][] = [
+    [
+      'dir',
+      'governing chain',
+      `wn ${unitSymbol('length', units)}`,
+      `An ${unitSymbol('area', units)}`,
+      'equal share',
+    ],
+  ];
   for (const d of r.directions) {
     const share = d.share
-      ? `${chainLabel(d.share.chain.holes)} ${d.share.fastenersCarried}/${d.share.fastenersTotal} → ${fmtArea(d.share.equivalentArea, units)}`
+      ? `${chainLabel(d.share.chain.holes)} ${d.share.fastenersCarried}/${d.share.fastenersTotal} → ${q(d.share.equivalentArea, 'area')}`
       : '—';
     rows.push([
       d.direction,
       d.governing ? chainLabel(d.governing.holes) : 'none (no chain can form)',
-      d.governing ? fmtLength(d.governing.netWidth, units) : '—',
-      fmtArea(d.An, units),
+      d.governing ? n(d.governing.netWidth, 'length') : '—',
+      n(d.An, 'area'),
       share,
     ]);
   }
   for (const line of columns(rows, ['left', 'left', 'right', 'right', 'left'])) out.push(`    ${line}`);
   const sym = strengthSymbol(file.profile);
   const cap = r.capped ? ' (0.85 Ag cap)' : '';
-  const util = r.utilisation !== undefined ? `   utilisation ${r.utilisation.toFixed(2)}` : '';
+  const util = r.utilisation !== undefined ? `   utilisation ${q(r.utilisation, 'ratio')}` : '';
   out.push(
-    `    Ag ${fmtArea(r.Ag, units)} ${u.area}   An ${fmtArea(r.An, units)} ${u.area} (${r.governingDirection})   U ${r.U.toFixed(2)}   Ae ${fmtArea(r.Ae, units)} ${u.area}${cap}`,
+    `    Ag ${q(r.Ag, 'area')}   An ${q(r.An, 'area')} (${r.governingDirection})   U ${q(r.U, 'ratio')}   Ae ${q(r.Ae, 'area')}${cap}`,
   );
   const netArea = r.shearLag?.netArea;
   if (netArea) {
-    out.push(
-      `    Ae = U × ${fmtArea(netArea.area, units)} ${u.area}, not U × An (${netArea.clause}: ${netArea.basis})`,
-    );
+    out.push(`    Ae = U × ${q(netArea.area, 'area')}, not U × An (${netArea.clause}: ${netArea.basis})`);
   }
   out.push(
-    `    ${sym} yielding ${fmtForce(r.yielding.available)} ${u.force}   rupture ${fmtForce(r.rupture.available)} ${u.force}   governs ${r.governing.limitState} ${fmtForce(r.governing.available)} ${u.force}${util}`,
+    `    ${sym} yielding ${q(r.yielding.available, 'force')}   rupture ${q(r.rupture.available, 'force')}   governs ${r.governing.limitState} ${q(r.governing.available, 'force')}${util}`,
   );
   const bs = r.blockShear;
   if (bs) {
     out.push(
-      `    block shear (${bs.direction}, ${bs.clause}) ${fmtForce(bs.available)} ${u.force}   Agv ${fmtArea(bs.Agv, units)}  Anv ${fmtArea(bs.Anv, units)}  Agt ${fmtArea(bs.Agt, units)}  Ant ${fmtArea(bs.Ant, units)} ${u.area}${bs.projectDefined ? '   (staggered tension plane: project-defined)' : ''}`,
+      `    block shear (${bs.direction}, ${bs.clause}) ${q(bs.available, 'force')}   Agv ${n(bs.Agv, 'area')}  Anv ${n(bs.Anv, 'area')}  Agt ${n(bs.Agt, 'area')}  Ant ${q(bs.Ant, 'area')}${bs.projectDefined ? '   (staggered tension plane: project-defined)' : ''}`,
     );
   }
   const shown = m.findings;
