@@ -1,7 +1,9 @@
 import { getConnectionToken } from '@nestjs/sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import request from 'supertest';
+import { findingQuantity } from 'ligament';
 import { HotReadsService } from '../src/database/hot-reads.service.js';
+import { DISCREPANCY_UNITS_BACKFILL } from '../src/database/migrations/0007-discrepancy-units.js';
 import { bearer, bootApp, EMAIL, login, type TestApp } from './helpers.js';
 
 let t: TestApp;
@@ -71,6 +73,40 @@ describe('discrepancy tallies (migration 0003)', () => {
     const { kept, counted } = await tallies();
     expect(kept).toEqual(counted);
     expect(kept.every((x) => x.n > 0)).toBe(true);
+  });
+});
+
+describe('discrepancy units and quantity (migration 0007)', () => {
+  type Row = { id: number; code: string; units: string | null; quantity: string | null; numbers: number };
+  const rows = async () =>
+    (
+      await sequelize.query(
+        `SELECT id, code, units, quantity, (claimed IS NOT NULL OR recomputed IS NOT NULL) AS numbers
+         FROM discrepancies ORDER BY id`,
+      )
+    )[0] as Row[];
+
+  it('are stored with every finding: the file’s units, and the engine’s quantity when it has numbers', async () => {
+    const stored = await rows();
+    expect(stored.length).toBeGreaterThan(10);
+    const [files] = (await sequelize.query(
+      `SELECT d.id, json_extract(c.document, '$.profile.units') AS units
+       FROM discrepancies d JOIN calc_files c ON c.id = d.calcFileId ORDER BY d.id`,
+    )) as [{ id: number; units: string }[], unknown];
+    expect(stored.map((r) => r.units)).toEqual(files.map((f) => f.units));
+    expect(stored.map((r) => [r.code, r.quantity])).toEqual(
+      stored.map((r) => [r.code, r.numbers ? findingQuantity(r.code) : null]),
+    );
+    expect(stored.some((r) => r.quantity === 'area') && stored.some((r) => r.quantity === 'force')).toBe(
+      true,
+    );
+  });
+
+  it('are backfilled for rows stored before the migration, as the service stores them', async () => {
+    const before = await rows();
+    await sequelize.query('UPDATE discrepancies SET units = NULL, quantity = NULL');
+    for (const sql of DISCREPANCY_UNITS_BACKFILL) await sequelize.query(sql);
+    expect(await rows()).toEqual(before);
   });
 });
 

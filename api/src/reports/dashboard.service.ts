@@ -4,6 +4,7 @@ import type { FindingClass, Severity } from 'ligament';
 import { Op } from 'sequelize';
 import type { AuthUser } from '../auth/auth-user.js';
 import { ProjectAccessService } from '../auth/project-access.service.js';
+import { quantityText } from '../common/quantity.js';
 import { OPEN_STATUSES } from '../discrepancies/discrepancy-status.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { Project } from '../projects/models/project.model.js';
@@ -161,8 +162,8 @@ export class DashboardService {
         d.severity,
         d.status,
         d.chain ? d.chain.split(',').join(' ') : '',
-        d.claimed,
-        d.recomputed,
+        d.claimed === null ? '' : quantityText(d.claimed, d.quantity, d.units),
+        d.recomputed === null ? '' : quantityText(d.recomputed, d.quantity, d.units),
         Math.floor((now.getTime() - new Date(d.createdAt).getTime()) / DAY),
         new Date(d.createdAt).toISOString(),
         d.message,

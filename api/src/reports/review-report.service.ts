@@ -1,7 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
+import { formatQuantity, type Dimension } from 'ligament';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
+import { quantityText } from '../common/quantity.js';
 import { Project } from '../projects/models/project.model.js';
 import { MemberResult } from '../results/models/member-result.model.js';
 import { stampWords, SubmittalsService } from '../submittals/submittals.service.js';
@@ -11,14 +13,6 @@ export const CAUTION =
 
 function esc(value: unknown): string {
   return String(value ?? '').replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-}
-
-function num(value: number | null | undefined, digits = 3): string {
-  return value === null || value === undefined
-    ? '—'
-    : Number(value.toPrecision(6))
-        .toFixed(digits)
-        .replace(/\.?0+$/, '');
 }
 
 /** The printable review report of a submittal (HTML; print it to PDF from any browser). */
@@ -45,19 +39,20 @@ export class ReviewReportService {
       }),
     ]);
     const names = new Map(files.map((f) => [f.id, f.fileName]));
-    const units =
-      results[0]?.profile.units === 'mm' ? { a: 'mm²', f: 'kN', l: 'mm' } : { a: 'in²', f: 'kip', l: 'in' };
     const memberRows = results
       .map((r) => {
+        // Each member's numbers in its own file's units: a submittal may mix in and mm files.
+        const q = (value: number, dimension: Dimension) =>
+          esc(formatQuantity(value, dimension, r.profile.units));
         const chains = r.directions
           .map(
             (d) =>
-              `${esc(d.direction)}: ${d.governing ? `${esc(d.governing.holes.join('–'))} (wn ${num(d.governing.netWidth)} ${units.l})` : 'no chain forms'}`,
+              `${esc(d.direction)}: ${d.governing ? `${esc(d.governing.holes.join('–'))} (wn ${q(d.governing.netWidth, 'length')})` : 'no chain forms'}`,
           )
           .join('<br>');
         return `<tr><td>${esc(names.get(r.calcFileId))}</td><td>${esc(r.memberId)}</td><td>${esc(`${r.profile.standard} ${r.profile.method}`)}</td>
-<td class="n">${num(r.Ag)}</td><td class="n">${num(r.An)}</td><td class="n">${num(r.U, 2)}</td><td class="n">${num(r.Ae)}</td>
-<td>${chains}</td><td class="n">${num(r.yielding, 1)}</td><td class="n">${num(r.rupture, 1)}</td><td class="n"><b>${num(r.available, 1)}</b>${(r.result as { governing?: { limitState?: string } } | null)?.governing?.limitState === 'block shear' ? '<br><small>block shear</small>' : ''}</td></tr>`;
+<td class="n">${q(r.Ag, 'area')}</td><td class="n">${q(r.An, 'area')}</td><td class="n">${q(r.U, 'ratio')}</td><td class="n">${q(r.Ae, 'area')}</td>
+<td>${chains}</td><td class="n">${q(r.yielding, 'force')}</td><td class="n">${q(r.rupture, 'force')}</td><td class="n"><b>${q(r.available, 'force')}</b>${(r.result as { governing?: { limitState?: string } } | null)?.governing?.limitState === 'block shear' ? '<br><small>block shear</small>' : ''}</td></tr>`;
       })
       .join('\n');
     const findingRows = findings
@@ -65,7 +60,7 @@ export class ReviewReportService {
         (
           d,
         ) => `<tr class="${esc(d.severity)}"><td>${esc(d.code)}</td><td>${esc(d.severity)}</td><td>${esc(d.class)}</td><td>${esc(d.memberId ?? '')}</td>
-<td>${esc(d.chain ? d.chain.split(',').join('–') : '')}</td><td class="n">${num(d.claimed)}</td><td class="n">${num(d.recomputed)}</td><td>${esc(d.message)}</td><td>${esc(d.status)}</td></tr>`,
+<td>${esc(d.chain ? d.chain.split(',').join('–') : '')}</td><td class="n">${esc(quantityText(d.claimed, d.quantity, d.units))}</td><td class="n">${esc(quantityText(d.recomputed, d.quantity, d.units))}</td><td>${esc(d.message)}</td><td>${esc(d.status)}</td></tr>`,
       )
       .join('\n');
     const stamp = s.stamp
@@ -94,7 +89,7 @@ th{background:#eee}td.n{text-align:right;font-variant-numeric:tabular-nums}tr.er
 </table>
 <h2>Review action</h2>
 ${stamp}
-<h2>Members (areas in ${units.a}, strengths available, ${units.f})</h2>
+<h2>Members (available strengths; each in its file's units)</h2>
 <table><thead><tr><th>File</th><th>Member</th><th>Code</th><th>Ag</th><th>An</th><th>U</th><th>Ae</th><th>Governing chain by load direction</th><th>Yielding</th><th>Rupture</th><th>Available</th></tr></thead>
 <tbody>
 ${memberRows}

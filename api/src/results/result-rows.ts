@@ -1,4 +1,12 @@
-import type { CalcAudit, CalcDocument, Chain, Finding, MemberAudit } from 'ligament';
+import {
+  findingQuantity,
+  type CalcAudit,
+  type CalcDocument,
+  type Chain,
+  type Finding,
+  type MemberAudit,
+  type UnitSystem,
+} from 'ligament';
 import { canonicalJson, sha256Hex } from '../common/hash.js';
 import type { StoredDirection } from './models/member-result.model.js';
 
@@ -58,7 +66,9 @@ export function findingKey(f: { code: string; memberId?: string | null; chain?: 
 export function discrepancyRow(
   ids: { projectId: number; submittalId: number; calcFileId: number; fileName: string },
   f: Finding,
+  units: UnitSystem,
 ) {
+  const numbers = f.claimed !== undefined || f.recomputed !== undefined;
   return {
     ...ids,
     memberId: f.memberId ?? null,
@@ -70,6 +80,8 @@ export function discrepancyRow(
     chain: findingChain(f),
     claimed: f.claimed ?? null,
     recomputed: f.recomputed ?? null,
+    units,
+    quantity: numbers ? findingQuantity(f.code) : null,
     message: f.message,
     pointer: f.pointer,
     status: 'raised' as const,

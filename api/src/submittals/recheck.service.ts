@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { InjectModel } from '@nestjs/sequelize';
-import { ENGINE_VERSION } from 'ligament';
+import { ENGINE_VERSION, type Dimension } from 'ligament';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import { uploadsConfig } from '../config/index.js';
@@ -14,6 +14,16 @@ import type { RecheckDto, RecheckFindingDto, RecheckValueChangeDto } from './dto
 import { SubmittalsService } from './submittals.service.js';
 
 const COMPARED = ['Ag', 'An', 'Ae', 'U', 'yielding', 'rupture', 'available'] as const;
+/** What each compared value measures, for writing it with its unit. */
+const QUANTITY: Record<(typeof COMPARED)[number], Dimension> = {
+  Ag: 'area',
+  An: 'area',
+  Ae: 'area',
+  U: 'ratio',
+  yielding: 'force',
+  rupture: 'force',
+  available: 'force',
+};
 
 /** Same to 1e-9 relative: a recheck reports real changes, not float noise. */
 function same(a: number, b: number): boolean {
@@ -77,6 +87,8 @@ export class RecheckService {
                 field,
                 stored: old ? old[field] : null,
                 current: now[field],
+                units: file.document.profile.units,
+                quantity: QUANTITY[field],
               });
             }
           }
@@ -87,6 +99,8 @@ export class RecheckService {
               field: 'inputsHash',
               stored: null,
               current: null,
+              units: file.document.profile.units,
+              quantity: null,
             });
           }
           for (const f of member.findings) {

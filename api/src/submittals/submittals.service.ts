@@ -153,7 +153,11 @@ export class SubmittalsService {
           );
           for (const finding of member.findings) {
             discrepancyRows.push(
-              discrepancyRow({ projectId, submittalId: s.id, calcFileId, fileName: file.name }, finding),
+              discrepancyRow(
+                { projectId, submittalId: s.id, calcFileId, fileName: file.name },
+                finding,
+                file.document.profile.units,
+              ),
             );
           }
         }

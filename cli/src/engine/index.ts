@@ -5,6 +5,7 @@ export { EngineError, type EngineErrorCode } from './engineError.js';
 export { ENGINE_VERSION } from './engineVersion.js';
 export { FINDING_CATALOGUE } from './findingCatalogue.js';
 export { findingRule } from './findingRule.js';
+export { findingQuantity } from './findingQuantity.js';
 export { holeTableInch, type HoleTableRow } from './holeTableInch.js';
 export { holeTableMetric } from './holeTableMetric.js';
 export { minimumEdgeDistance } from './minimumEdgeDistance.js';

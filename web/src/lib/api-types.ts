@@ -1057,6 +1057,16 @@ export interface components {
       field: string;
       stored: number | null;
       current: number | null;
+      /**
+       * @description Unit system of the calc file
+       * @enum {string}
+       */
+      units: 'in' | 'mm';
+      /**
+       * @description What stored and current measure; null for inputsHash
+       * @enum {string|null}
+       */
+      quantity: 'length' | 'area' | 'force' | 'stress' | 'ratio' | null;
     };
     RecheckFindingDto: {
       fileName: string;
@@ -1190,6 +1200,16 @@ export interface components {
       chain: string[];
       claimed: number | null;
       recomputed: number | null;
+      /**
+       * @description Unit system of the calc file, which claimed and recomputed are in
+       * @enum {string|null}
+       */
+      units: 'in' | 'mm' | null;
+      /**
+       * @description What claimed and recomputed measure (in: in, in², kip, ksi; mm: mm, mm², kN, MPa; ratio: none); null without numbers
+       * @enum {string|null}
+       */
+      quantity: 'length' | 'area' | 'force' | 'stress' | 'ratio' | null;
       message: string;
       /** @description JSON pointer into the calc file */
       pointer: string;
@@ -1255,6 +1275,16 @@ export interface components {
       chain: string[];
       claimed: number | null;
       recomputed: number | null;
+      /**
+       * @description Unit system of the calc file, which claimed and recomputed are in
+       * @enum {string|null}
+       */
+      units: 'in' | 'mm' | null;
+      /**
+       * @description What claimed and recomputed measure (in: in, in², kip, ksi; mm: mm, mm², kN, MPa; ratio: none); null without numbers
+       * @enum {string|null}
+       */
+      quantity: 'length' | 'area' | 'force' | 'stress' | 'ratio' | null;
       message: string;
       /** @description JSON pointer into the calc file */
       pointer: string;

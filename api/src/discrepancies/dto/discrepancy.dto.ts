@@ -82,6 +82,21 @@ export class DiscrepancyDto {
   @ApiProperty({ type: [String], description: 'Hole ids of the chain or holes concerned' }) chain: string[];
   @ApiProperty({ nullable: true, type: Number }) claimed: number | null;
   @ApiProperty({ nullable: true, type: Number }) recomputed: number | null;
+  @ApiProperty({
+    nullable: true,
+    type: String,
+    enum: ['in', 'mm'],
+    description: 'Unit system of the calc file, which claimed and recomputed are in',
+  })
+  units: 'in' | 'mm' | null;
+  @ApiProperty({
+    nullable: true,
+    type: String,
+    enum: ['length', 'area', 'force', 'stress', 'ratio'],
+    description:
+      'What claimed and recomputed measure (in: in, in², kip, ksi; mm: mm, mm², kN, MPa; ratio: none); null without numbers',
+  })
+  quantity: 'length' | 'area' | 'force' | 'stress' | 'ratio' | null;
   @ApiProperty() message: string;
   @ApiProperty({ description: 'JSON pointer into the calc file' }) pointer: string;
   @ApiProperty({ enum: DISCREPANCY_STATUSES }) status: DiscrepancyStatus;

@@ -1,5 +1,5 @@
 import { Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
-import type { FindingClass, Severity } from 'ligament';
+import type { Dimension, FindingClass, Severity, UnitSystem } from 'ligament';
 import { CalcFile } from '../../calc-files/models/calc-file.model.js';
 import { Project } from '../../projects/models/project.model.js';
 import { Submittal } from '../../submittals/models/submittal.model.js';
@@ -26,6 +26,10 @@ export class Discrepancy extends Model {
   @Column({ type: DataType.STRING, allowNull: true }) declare chain: string | null;
   @Column({ type: DataType.FLOAT, allowNull: true }) declare claimed: number | null;
   @Column({ type: DataType.FLOAT, allowNull: true }) declare recomputed: number | null;
+  /** Unit system of the calc file: claimed and recomputed are in its units (migration 0007). */
+  @Column({ type: DataType.STRING, allowNull: true }) declare units: UnitSystem | null;
+  /** What claimed and recomputed measure (engine findingQuantity); null when the finding has no numbers. */
+  @Column({ type: DataType.STRING, allowNull: true }) declare quantity: Dimension | null;
   @Column({ type: DataType.TEXT, allowNull: false }) declare message: string;
   @Column({ type: DataType.STRING, allowNull: false }) declare pointer: string;
   @Column({ type: DataType.STRING, allowNull: false }) declare status: DiscrepancyStatus;

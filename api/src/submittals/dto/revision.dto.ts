@@ -55,6 +55,14 @@ export class RecheckValueChangeDto {
   @ApiProperty({ example: 'An' }) field: string;
   @ApiProperty({ nullable: true, type: Number }) stored: number | null;
   @ApiProperty({ nullable: true, type: Number }) current: number | null;
+  @ApiProperty({ enum: ['in', 'mm'], description: 'Unit system of the calc file' }) units: 'in' | 'mm';
+  @ApiProperty({
+    nullable: true,
+    type: String,
+    enum: ['length', 'area', 'force', 'stress', 'ratio'],
+    description: 'What stored and current measure; null for inputsHash',
+  })
+  quantity: 'length' | 'area' | 'force' | 'stress' | 'ratio' | null;
 }
 
 export class RecheckDto {
