@@ -1,10 +1,9 @@
 import { ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import type { FindingClass, Severity } from 'ligament';
+import { quantityText, type FindingClass, type Severity } from 'ligament';
 import { Op } from 'sequelize';
 import type { AuthUser } from '../auth/auth-user.js';
 import { ProjectAccessService } from '../auth/project-access.service.js';
-import { quantityText } from '../common/quantity.js';
 import { OPEN_STATUSES } from '../discrepancies/discrepancy-status.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { Project } from '../projects/models/project.model.js';

@@ -1,9 +1,8 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { formatQuantity, type Dimension } from 'ligament';
+import { formatQuantity, quantityText, type Dimension } from 'ligament';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
-import { quantityText } from '../common/quantity.js';
 import { Project } from '../projects/models/project.model.js';
 import { MemberResult } from '../results/models/member-result.model.js';
 import { stampWords, SubmittalsService } from '../submittals/submittals.service.js';

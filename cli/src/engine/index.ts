@@ -31,6 +31,7 @@ export { grazingFindings } from './grazingFindings.js';
 export { withinTolerance, DEFAULT_TOLERANCE, type ToleranceSpec } from './withinTolerance.js';
 export { formatQuantity, type Dimension, type FormatQuantityOptions } from './formatQuantity.js';
 export { unitSymbol } from './unitSymbol.js';
+export { quantityText } from './quantityText.js';
 export { formatDirection } from './formatDirection.js';
 export { auditMember } from './auditMember.js';
 export { auditCalc } from './auditCalc.js';

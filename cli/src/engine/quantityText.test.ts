@@ -1,4 +1,5 @@
-import { quantityText } from './quantity.js';
+import { describe, expect, it } from 'vitest';
+import { quantityText } from './quantityText.js';
 
 describe('quantityText', () => {
   it('writes a stored value with the unit and precision of its file', () => {
@@ -10,8 +11,9 @@ describe('quantityText', () => {
     expect(quantityText(0.9, 'ratio', 'mm')).toBe('0.900');
   });
 
-  it('writes a dash for no value', () => {
+  it('writes a dash for no value, and a bare number when quantity or units are unknown', () => {
     expect(quantityText(null, 'area', 'in')).toBe('—');
     expect(quantityText(undefined, 'force', 'mm')).toBe('—');
+    expect(quantityText(4.21429, null, 'in')).toBe('4.214');
   });
 });
