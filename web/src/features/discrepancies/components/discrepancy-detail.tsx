@@ -13,6 +13,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { DismissRegular, EyeRegular } from '@fluentui/react-icons';
+import { quantityText } from 'ligament/engine';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
@@ -74,11 +75,6 @@ const noteLabel: Record<MoveInput['to'], string> = {
   returned: 'Why it goes back to the consultant',
   waived: 'Why it is waived',
 };
-
-/** Six significant figures, enough to see a difference without float noise (3.9124999… → 3.9125). */
-function showNumber(value: number | null): string {
-  return value === null ? '—' : String(Number(value.toPrecision(6)));
-}
 
 function eventText(type: string, data: Record<string, unknown>): string {
   const to = typeof data.to === 'string' ? data.to : undefined;
@@ -244,7 +240,8 @@ export function DiscrepancyDetail({ discrepancyId, projectId, onClose, canCommen
           <>
             <span className={styles.label}>Claimed · recomputed</span>
             <span>
-              {showNumber(d.claimed)} · {showNumber(d.recomputed)}
+              {quantityText(d.claimed, d.quantity, d.units)} ·{' '}
+              {quantityText(d.recomputed, d.quantity, d.units)}
             </span>
           </>
         )}

@@ -10,8 +10,8 @@ import {
   TableRow,
   tokens,
 } from '@fluentui/react-components';
-import type { UnitSystem } from 'ligament/engine';
-import { chainKey, chainLabel, formatQuantity, unitLabels } from '@/lib/units';
+import { formatQuantity, unitSymbol, type Dimension, type UnitSystem } from 'ligament/engine';
+import { chainKey, chainLabel } from '@/lib/units';
 
 const useStyles = makeStyles({
   row: {
@@ -50,7 +50,9 @@ export function ChainsTable({
   onHighlight,
 }: ChainsTableProps) {
   const styles = useStyles();
-  const u = unitLabels[units];
+  const unit = (dimension: Dimension) => unitSymbol(dimension, units);
+  const n = (value: number | undefined, dimension: Dimension) =>
+    value === undefined ? '—' : formatQuantity(value, dimension, units, { unit: false });
   const governingKey = governing ? chainKey(direction, governing) : null;
   return (
     <Table size="small" aria-label={`Least chains, load from ${direction}`}>
@@ -58,10 +60,10 @@ export function ChainsTable({
         <TableRow>
           <TableHeaderCell>#</TableHeaderCell>
           <TableHeaderCell>Chain (holes in y order)</TableHeaderCell>
-          <TableHeaderCell className={styles.num}>Holes deducted ({u.length})</TableHeaderCell>
-          <TableHeaderCell className={styles.num}>Σ s²/4g ({u.length})</TableHeaderCell>
-          <TableHeaderCell className={styles.num}>Net width ({u.length})</TableHeaderCell>
-          <TableHeaderCell className={styles.num}>Net area ({u.area})</TableHeaderCell>
+          <TableHeaderCell className={styles.num}>Holes deducted ({unit('length')})</TableHeaderCell>
+          <TableHeaderCell className={styles.num}>Σ s²/4g ({unit('length')})</TableHeaderCell>
+          <TableHeaderCell className={styles.num}>Net width ({unit('length')})</TableHeaderCell>
+          <TableHeaderCell className={styles.num}>Net area ({unit('area')})</TableHeaderCell>
         </TableRow>
       </TableHeader>
       <TableBody>
@@ -77,7 +79,7 @@ export function ChainsTable({
               onMouseLeave={() => onHighlight(null)}
               onFocus={() => onHighlight(key)}
               onBlur={() => onHighlight(null)}
-              aria-label={`Chain ${chainLabel(chain.holes)}, net width ${formatQuantity(chain.netWidth, units, 'length')} ${u.length}${key === governingKey ? ', governing' : ''}`}
+              aria-label={`Chain ${chainLabel(chain.holes)}, net width ${formatQuantity(chain.netWidth, 'length', units)}${key === governingKey ? ', governing' : ''}`}
             >
               <TableCell>{index + 1}</TableCell>
               <TableCell>
@@ -88,12 +90,10 @@ export function ChainsTable({
                   </Badge>
                 )}
               </TableCell>
-              <TableCell className={styles.num}>{formatQuantity(chain.deducted, units, 'length')}</TableCell>
-              <TableCell className={styles.num}>
-                {formatQuantity(chain.staggerSum, units, 'length')}
-              </TableCell>
-              <TableCell className={styles.num}>{formatQuantity(chain.netWidth, units, 'length')}</TableCell>
-              <TableCell className={styles.num}>{formatQuantity(chain.netArea, units, 'area')}</TableCell>
+              <TableCell className={styles.num}>{n(chain.deducted, 'length')}</TableCell>
+              <TableCell className={styles.num}>{n(chain.staggerSum, 'length')}</TableCell>
+              <TableCell className={styles.num}>{n(chain.netWidth, 'length')}</TableCell>
+              <TableCell className={styles.num}>{n(chain.netArea, 'area')}</TableCell>
             </TableRow>
           );
         })}

@@ -11,8 +11,8 @@ import {
 } from '@fluentui/react-components';
 import { ArrowDownRegular, ArrowUpRegular, CheckmarkRegular, SubtractRegular } from '@fluentui/react-icons';
 import type { MemberClaims } from 'ligament/calc';
-import type { UnitSystem } from 'ligament/engine';
-import { chainLabel, formatQuantity, unitLabels, type UnitLabels } from '@/lib/units';
+import { quantityText, type Dimension, type UnitSystem } from 'ligament/engine';
+import { chainLabel } from '@/lib/units';
 
 const useStyles = makeStyles({
   table: { tableLayout: 'auto' },
@@ -43,7 +43,7 @@ export interface Recomputed {
 
 type NumericKey = 'Ag' | 'An' | 'U' | 'Ae' | 'yielding' | 'rupture' | 'blockShear' | 'available';
 
-const rows: readonly { key: NumericKey; label: string; kind: keyof UnitLabels | 'ratio' }[] = [
+const rows: readonly { key: NumericKey; label: string; kind: Dimension }[] = [
   { key: 'Ag', label: 'Gross area Ag', kind: 'area' },
   { key: 'An', label: 'Net area An', kind: 'area' },
   { key: 'U', label: 'Shear lag factor U', kind: 'ratio' },
@@ -75,8 +75,6 @@ function verdict(claimed: number | undefined, recomputed: number, tolerance: num
 /** Claimed and recomputed values side by side; each difference is marked with an arrow and a word as well as colour. */
 export function ClaimsComparison({ claims, recomputed, units, tolerance = 0.005 }: ClaimsComparisonProps) {
   const styles = useStyles();
-  const u = unitLabels[units];
-  const unitOf = (kind: keyof UnitLabels | 'ratio') => (kind === 'ratio' ? '' : ` (${u[kind]})`);
   const claimedChain = claims?.controllingChain?.holes;
   const chainSame =
     claimedChain && recomputed.controllingChain
@@ -130,10 +128,9 @@ export function ClaimsComparison({ claims, recomputed, units, tolerance = 0.005 
                 <TableCell>
                   {label}
                   {key === 'available' && recomputed.governs ? `, ${recomputed.governs}` : ''}
-                  {unitOf(kind)}
                 </TableCell>
-                <TableCell className={styles.num}>{formatQuantity(claimed, units, kind)}</TableCell>
-                <TableCell className={styles.num}>{formatQuantity(value, units, kind)}</TableCell>
+                <TableCell className={styles.num}>{quantityText(claimed, kind, units)}</TableCell>
+                <TableCell className={styles.num}>{quantityText(value, kind, units)}</TableCell>
                 <TableCell>{mark(v, claimed, value)}</TableCell>
               </TableRow>
             );

@@ -66,3 +66,53 @@ describe('MemberPanel', () => {
     expect(within(governing).getByText(/agrees/)).toBeTruthy();
   });
 });
+
+describe('MemberPanel writes every number with its file’s unit and precision', () => {
+  function panelFor(example: string) {
+    const loaded = loadCalcText(
+      readFileSync(`${process.cwd()}/../schema/examples/${example}`, 'utf8'),
+      example,
+    );
+    if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('; '));
+    const member = loaded.document.members[0]!;
+    const result = analyseMember(member.input, loaded.document.profile, { k: 5 });
+    renderWithProviders(
+      <MemberPanel document={loaded.document} member={member} result={result} findings={[]} />,
+    );
+    const claims = screen.getByRole('table', { name: 'Claimed against recomputed' });
+    const cells = (label: RegExp) =>
+      within(within(claims).getByRole('row', { name: label }))
+        .getAllByRole('cell')
+        .map((c) => c.textContent);
+    return { cells };
+  }
+
+  // Hand arithmetic in the examples' meta.notes: D.9 layout, An = 11.542 × 0.5 = 5.771 in² (claimed 5.770),
+  // yielding 0.90 × 36 × 7.00 = 226.8 kip; south hanger An = 186.727 × 16 = 2987.6 mm², claimed 3232.
+  it('an inch file: in² and kip in each cell, in in the chain table headings', () => {
+    const { cells } = panelFor('north-splice-correct.json');
+    expect(cells(/^Net area An/).slice(1, 3)).toEqual(['5.770 in²', '5.771 in²']);
+    expect(cells(/^Tensile yielding/).slice(1, 3)).toEqual(['226.8 kip', '226.8 kip']);
+    expect(cells(/^Shear lag factor U/).slice(1, 3)).toEqual(['1.000', '1.000']);
+    expect(screen.getAllByRole('columnheader', { name: 'Net width (in)' }).length).toBeGreaterThan(0);
+    expect(
+      screen.getAllByRole('row', { name: /^Chain A1 – B1 – C1 – D1, net width 11\.542 in/ }).length,
+    ).toBe(2);
+  });
+
+  it('a mm file: mm² and kN in each cell, mm in the chain table headings', () => {
+    const { cells } = panelFor('south-hanger-missed-chain.json');
+    expect(cells(/^Net area An/).slice(1, 3)).toEqual(['3232 mm²', '2988 mm²']);
+    expect(cells(/^Tensile rupture/).slice(1, 3)).toEqual(['1090.8 kN', '1008.3 kN']);
+    expect(screen.getByRole('columnheader', { name: 'Net area (mm²)' })).toBeTruthy();
+    const governing = screen.getByRole('row', {
+      name: /^Chain H1 – H2 – H3 – H4, net width 186\.7 mm, governing/,
+    });
+    expect(
+      within(governing)
+        .getAllByRole('cell')
+        .map((c) => c.textContent)
+        .slice(-2),
+    ).toEqual(['186.7', '2988']);
+  });
+});

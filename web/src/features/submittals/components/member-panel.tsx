@@ -7,7 +7,6 @@ import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
 import { EmptyState } from '@/components/states';
 import { CAUTION } from '@/config/caution';
 import type { Schema } from '@/lib/api-schemas';
-import { unitLabels } from '@/lib/units';
 import { ChainsTable } from './chains-table';
 import { ClaimsComparison } from './claims-comparison';
 import { MemberDrawing, type DrawnChain } from './member-drawing';
@@ -91,7 +90,7 @@ export function MemberPanel({ document, member, result, findings }: MemberPanelP
           <Text size={200} className={styles.legend}>
             Dashed lines are the governing fracture line for each load direction (labelled −x or +x with the
             net width). Hover or focus a chain in the tables below to trace it on the plate. Dimensions in{' '}
-            {unitLabels[units].length}.
+            {units === 'in' ? 'inches' : 'millimetres'}.
           </Text>
         </div>
         <div className={styles.block}>

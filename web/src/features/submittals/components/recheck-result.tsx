@@ -13,6 +13,7 @@ import {
   Text,
   tokens,
 } from '@fluentui/react-components';
+import { quantityText } from 'ligament/engine';
 import type { Schema } from '@/lib/api-schemas';
 import { plural } from '@/lib/format';
 
@@ -31,9 +32,6 @@ const useStyles = makeStyles({
     margin: 0,
   },
 });
-
-/** Six significant figures: enough to see a change without float noise. */
-const show = (v: number | null) => (v === null ? '—' : String(Number(v.toPrecision(6))));
 
 function FindingTable({ label, findings }: { label: string; findings: readonly RecheckFinding[] }) {
   const styles = useStyles();
@@ -117,8 +115,12 @@ export function RecheckResult({ result }: RecheckResultProps) {
                       {v.fileName} · {v.memberId}
                     </TableCell>
                     <TableCell>{v.field}</TableCell>
-                    <TableCell className={styles.num}>{show(v.stored)}</TableCell>
-                    <TableCell className={styles.num}>{show(v.current)}</TableCell>
+                    <TableCell className={styles.num}>
+                      {quantityText(v.stored, v.quantity, v.units)}
+                    </TableCell>
+                    <TableCell className={styles.num}>
+                      {quantityText(v.current, v.quantity, v.units)}
+                    </TableCell>
                   </TableRow>
                 ))}
               </TableBody>

@@ -13,6 +13,7 @@ import {
 } from '@fluentui/react-components';
 import { ArrowLeftRegular, PrintRegular } from '@fluentui/react-icons';
 import { buildDrawing } from 'ligament/draw';
+import { formatQuantity, type Dimension } from 'ligament/engine';
 import { useNavigate, useParams } from 'react-router-dom';
 import { SeverityBadge } from '@/components/finding-badges';
 import { LogoMark } from '@/components/logo-mark';
@@ -20,7 +21,7 @@ import { ErrorState, LoadingState } from '@/components/states';
 import { CAUTION } from '@/config/caution';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/lib/format';
-import { chainLabel, formatQuantity, unitLabels } from '@/lib/units';
+import { chainLabel } from '@/lib/units';
 import { useMemberResults } from '../api/get-member-results';
 import { useReportFiles } from '../api/get-report-files';
 import { useSubmittal } from '../api/get-submittal';
@@ -132,7 +133,7 @@ export function Component() {
             if (!row) return null;
             const r = row.result;
             const units = file.document.profile.units;
-            const u = unitLabels[units];
+            const q = (value: number, dimension: Dimension) => formatQuantity(value, dimension, units);
             const drawing = buildDrawing(member.input, r, {
               units,
               profile: file.document.profile,
@@ -157,22 +158,20 @@ export function Component() {
                 <div className={styles.facts}>
                   <Text>Ag / An / Ae</Text>
                   <Text>
-                    {formatQuantity(r.Ag, units, 'area')} / {formatQuantity(r.An, units, 'area')} /{' '}
-                    {formatQuantity(r.Ae, units, 'area')} {u.area}
+                    {q(r.Ag, 'area')} / {q(r.An, 'area')} / {q(r.Ae, 'area')}
                     {r.capped ? ' (Ae capped at 0.85 Ag)' : ''}
                   </Text>
                   {r.directions.flatMap((d) => [
                     <Text key={`l${d.direction}`}>Governing chain, load from {d.direction}</Text>,
                     <Text key={`v${d.direction}`}>
                       {d.governing
-                        ? `${chainLabel(d.governing.holes)}: wn ${formatQuantity(d.governing.netWidth, units, 'length')} ${u.length}`
+                        ? `${chainLabel(d.governing.holes)}: wn ${q(d.governing.netWidth, 'length')}`
                         : 'none can form'}
                     </Text>,
                   ])}
                   <Text>Available strength</Text>
                   <Text>
-                    {formatQuantity(r.governing.available, units, 'force')} {u.force} (
-                    {r.governing.limitState})
+                    {q(r.governing.available, 'force')} ({r.governing.limitState})
                   </Text>
                 </div>
                 {findings.length > 0 ? (
