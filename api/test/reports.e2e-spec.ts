@@ -88,3 +88,36 @@ describe('discrepancies carry the unit system and quantity of their numbers', ()
     expect(csv).toMatch(/,"LG142",[^\r\n]*,"","1\.000",/);
   });
 });
+
+describe('each code is named by its own design method (issue 10.11)', () => {
+  const example = (name: string, method: string) => {
+    const doc = JSON.parse(readFileSync(join(__dirname, '..', '..', 'schema', 'examples', name), 'utf8')) as {
+      code: { method: string };
+    };
+    doc.code.method = method;
+    return Buffer.from(JSON.stringify(doc));
+  };
+
+  it('EN 1993-1-1 and CSA S16 files, one written to 1.0 with "LRFD": never labelled LRFD', async () => {
+    const res = await request(t.http)
+      .post('/api/projects/1/submittals')
+      .set(bearer(checker))
+      .field('title', 'EN deck tie (1.0 file saying LRFD) and CSA lap splice')
+      .attach('files', example('lantern-deck-en1993.json', 'LRFD'), 'deck-en1993.json')
+      .attach('files', example('lantern-lap-csa.json', 'LSD'), 'lap-csa.json');
+    expect(res.status).toBe(201);
+    const id = res.body.submittalId as number;
+    const results = (await request(t.http).get(`/api/submittals/${id}/results`).set(bearer(checker)))
+      .body as { fileName: string; profile: { method: string; label: string } }[];
+    expect([
+      ...new Set(results.map((r) => `${r.fileName}: ${r.profile.method} · ${r.profile.label}`)),
+    ]).toEqual([
+      'deck-en1993.json: partial-factor · EN 1993-1-1, partial factors γM0 1.00, γM2 1.25',
+      'lap-csa.json: LSD · CSA S16-19, limit states design φ 0.90, φu 0.75',
+    ]);
+    const html = (await request(t.http).get(`/api/submittals/${id}/report`).set(bearer(checker))).text;
+    expect(html).toContain('<td>EN 1993-1-1, partial factors γM0 1.00, γM2 1.25</td>');
+    expect(html).toContain('<td>CSA S16-19, limit states design φ 0.90, φu 0.75</td>');
+    expect(html).not.toMatch(/(EN 1993-1-1|CSA S16-19) LRFD/);
+  });
+});

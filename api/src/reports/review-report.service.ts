@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { formatQuantity, quantityText, type Dimension } from 'ligament';
+import { codeLabel, formatQuantity, quantityText, type Dimension } from 'ligament';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { Project } from '../projects/models/project.model.js';
@@ -49,7 +49,7 @@ export class ReviewReportService {
               `${esc(d.direction)}: ${d.governing ? `${esc(d.governing.holes.join('–'))} (wn ${q(d.governing.netWidth, 'length')})` : 'no chain forms'}`,
           )
           .join('<br>');
-        return `<tr><td>${esc(names.get(r.calcFileId))}</td><td>${esc(r.memberId)}</td><td>${esc(`${r.profile.standard} ${r.profile.method}`)}</td>
+        return `<tr><td>${esc(names.get(r.calcFileId))}</td><td>${esc(r.memberId)}</td><td>${esc(codeLabel(r.profile))}</td>
 <td class="n">${q(r.Ag, 'area')}</td><td class="n">${q(r.An, 'area')}</td><td class="n">${q(r.U, 'ratio')}</td><td class="n">${q(r.Ae, 'area')}</td>
 <td>${chains}</td><td class="n">${q(r.yielding, 'force')}</td><td class="n">${q(r.rupture, 'force')}</td><td class="n"><b>${q(r.available, 'force')}</b>${(r.result as { governing?: { limitState?: string } } | null)?.governing?.limitState === 'block shear' ? '<br><small>block shear</small>' : ''}</td></tr>`;
       })

@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
+import { codeLabel, designMethodOf } from 'ligament';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import type { MemberResultDto } from './dto/member-result.dto.js';
 import { MemberResult } from './models/member-result.model.js';
@@ -24,7 +25,12 @@ export class ResultsService {
       fileName: names.get(r.calcFileId) ?? '',
       memberId: r.memberId,
       engineVersion: r.engineVersion,
-      profile: r.profile,
+      profile: {
+        standard: r.profile.standard,
+        method: designMethodOf(r.profile),
+        units: r.profile.units,
+        label: codeLabel(r.profile),
+      },
       inputsHash: r.inputsHash,
       Ag: r.Ag,
       An: r.An,

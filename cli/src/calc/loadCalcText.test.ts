@@ -209,7 +209,7 @@ describe('loadCalcText: messages in plain words', () => {
       ),
     );
     expect(errors.map((e) => e.message)).toEqual([
-      '/code/method: must be one of "LRFD" or "ASD", not "WSD" (rule enum)',
+      '/code/method: must be one of "LRFD", "ASD", "partial-factor" or "LSD", not "WSD" (rule enum)',
       '/members/0/width: "14 in" is not a length: a number greater than 0, or a string such as "2-1/8", "15/16", "3" or "1.5" (rule pattern)',
     ]);
   });

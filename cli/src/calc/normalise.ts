@@ -2,6 +2,7 @@ import { memberSection } from '../engine/memberSection.js';
 import { SectionError } from '../engine/sections/sectionError.js';
 import type { Section } from '../engine/sections/types.js';
 import { EngineError } from '../engine/engineError.js';
+import { designMethodOf } from '../engine/designMethodOf.js';
 import type {
   BlockShearSpec,
   CodeProfile,
@@ -311,11 +312,21 @@ export function normaliseDocument(raw: Raw): { document: CalcDocument; issues: S
       message: `/code/standard: ${profile.standard} files are in SI; give "units": "mm" (rule code-units)`,
     });
   }
-  if (si && profile.method !== 'LRFD') {
+  // Each code's own method; a 1.0 file may still say "LRFD" for EN or CSA (designMethodOf reads
+  // it as the code's own), so that files written before these names stay valid.
+  const own = designMethodOf(profile);
+  const accepted = si ? [own, 'LRFD'] : ['LRFD', 'ASD'];
+  if (!accepted.includes(profile.method)) {
+    const why =
+      own === 'partial-factor'
+        ? `${profile.standard} verifies by partial factors (γM0, γM2); give "method": "partial-factor"`
+        : own === 'LSD'
+          ? `${profile.standard} is limit states design with resistance factors (φ, φu); give "method": "LSD"`
+          : `${profile.standard} offers LRFD or ASD; give "method": "LRFD" or "ASD"`;
     issues.push({
       pointer: '/code/method',
       rule: 'code-method',
-      message: `/code/method: ${profile.standard} is limit states design; give "method": "LRFD" (rule code-method)`,
+      message: `/code/method: ${why} (rule code-method)`,
     });
   }
   const annex = code['nationalAnnex'] as Raw | undefined;

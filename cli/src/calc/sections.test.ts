@@ -71,7 +71,7 @@ describe('loadCalcText: section members', () => {
     );
     expect(en.profile).toEqual({
       standard: 'EN 1993-1-1',
-      method: 'LRFD',
+      method: 'partial-factor',
       units: 'mm',
       nationalAnnex: { gammaM2: 1.1 },
     });
@@ -128,7 +128,36 @@ describe('loadCalcText: section members', () => {
     expect(kind.map((e) => [e.pointer, e.rule])).toEqual([['/members/0/kind', 'section-kind']]);
   });
 
-  it('needs mm and LRFD for EN 1993 and CSA S16, and the National Annex only under EN', () => {
+  it('reads each code by its own method: partial-factor for EN 1993, LSD for CSA S16, LRFD or ASD for AISC 360; a 1.0 file saying LRFD for EN or CSA stays valid', () => {
+    const method = (example: string, m: string) =>
+      loadCalcText(
+        variant(example, (d) => (d['code'].method = m)),
+        'm.json',
+      );
+    const ok = (r: ReturnType<typeof loadCalcText>) => r.ok;
+    expect(ok(method('lantern-deck-en1993.json', 'partial-factor'))).toBe(true);
+    expect(ok(method('lantern-deck-en1993.json', 'LRFD'))).toBe(true);
+    expect(ok(method('lantern-lap-csa.json', 'LSD'))).toBe(true);
+    expect(ok(method('lantern-lap-csa.json', 'LRFD'))).toBe(true);
+    expect(ok(method('lantern-hanger-wt.json', 'ASD'))).toBe(true);
+    expect(
+      failed(method('lantern-deck-en1993.json', 'LSD')).map((e) => [e.pointer, e.rule, e.message]),
+    ).toEqual([
+      [
+        '/code/method',
+        'code-method',
+        '/code/method: EN 1993-1-1 verifies by partial factors (γM0, γM2); give "method": "partial-factor" (rule code-method)',
+      ],
+    ]);
+    expect(failed(method('lantern-lap-csa.json', 'partial-factor')).map((e) => e.message)).toEqual([
+      '/code/method: CSA S16-19 is limit states design with resistance factors (φ, φu); give "method": "LSD" (rule code-method)',
+    ]);
+    expect(failed(method('lantern-hanger-wt.json', 'LSD')).map((e) => e.message)).toEqual([
+      '/code/method: AISC 360-22 offers LRFD or ASD; give "method": "LRFD" or "ASD" (rule code-method)',
+    ]);
+  });
+
+  it('needs mm for EN 1993 and CSA S16, their own method, and the National Annex only under EN', () => {
     const csa = failed(
       loadCalcText(
         variant('lantern-lap-csa.json', (d) => {

@@ -1,4 +1,5 @@
 import type { CodeProfile, LoadDirection, MemberInput, MemberResult, UnitSystem } from '../engine/types.js';
+import { codeLabel } from '../engine/codeLabel.js';
 import { formatQuantity } from '../engine/formatQuantity.js';
 import { lengthLabel, netWidthLabel } from './labels.js';
 import { sectionStripShapes } from './sectionStrips.js';
@@ -450,7 +451,7 @@ function titleBlock(
   shapes.push(
     line(
       2,
-      `${sym} ${formatQuantity(result.governing.available, 'force', u)} (${result.governing.limitState} governs)${blockShearNote(result, u)}${options.profile ? ` · ${options.profile.standard} ${options.profile.method}` : ''}`,
+      `${sym} ${formatQuantity(result.governing.available, 'force', u)} (${result.governing.limitState} governs)${blockShearNote(result, u)}${options.profile ? ` · ${codeLabel(options.profile)}` : ''}`,
     ),
   );
   shapes.push(

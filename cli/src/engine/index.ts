@@ -36,6 +36,8 @@ export { formatDirection } from './formatDirection.js';
 export { auditMember } from './auditMember.js';
 export { auditCalc } from './auditCalc.js';
 export { tensionProfileOf } from './tensionProfileOf.js';
+export { designMethodOf } from './designMethodOf.js';
+export { codeLabel } from './codeLabel.js';
 export { memberHoleWidth } from './memberHoleWidth.js';
 export { memberSection } from './memberSection.js';
 export { memberShearLag } from './memberShearLag.js';

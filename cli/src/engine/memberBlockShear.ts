@@ -1,6 +1,7 @@
 import { blockShear, type BlockShearCode } from './block-shear/blockShear.js';
 import { BlockShearError } from './block-shear/blockShearError.js';
 import { sectionBlockLayout } from './block-shear/sectionBlockLayouts.js';
+import { designMethodOf } from './designMethodOf.js';
 import type { BlockShearCase, BlockShearLayout } from './block-shear/types.js';
 import type { SectionLayout } from './sections/types.js';
 import type {
@@ -31,7 +32,14 @@ function code(member: MemberInput, profile: CodeProfile): BlockShearCode {
     case 'CSA S16-19':
       return { standard: 'CSA S16', Fy, Fu, Ut: member.blockShear?.Ut ?? 1.0, edition: 'S16-19' };
     default:
-      return { standard: 'AISC 360', Fy, Fu, Ubs, method: profile.method, units: profile.units };
+      return {
+        standard: 'AISC 360',
+        Fy,
+        Fu,
+        Ubs,
+        method: designMethodOf(profile) === 'ASD' ? 'ASD' : 'LRFD',
+        units: profile.units,
+      };
   }
 }
 

@@ -26,8 +26,12 @@ export type LoadDirection = '-x' | '+x';
 /** Design code profiles the engine knows. */
 export type CodeStandard = 'AISC 360-22' | 'AISC 360-16' | 'AISC 360-10' | 'EN 1993-1-1' | 'CSA S16-19';
 
-/** Design method: load and resistance factor design or allowable strength design. */
-export type DesignMethod = 'LRFD' | 'ASD';
+/**
+ * Design method, named as each code names it: AISC 360 load and resistance factor design (`LRFD`)
+ * or allowable strength design (`ASD`); EN 1993 the partial factor method (`partial-factor`); CSA
+ * S16 limit states design (`LSD`). A 1.0 file may still say `LRFD` for EN or CSA (designMethodOf).
+ */
+export type DesignMethod = 'LRFD' | 'ASD' | 'partial-factor' | 'LSD';
 
 /**
  * What the member is: a plate (`plate`, `splice-plate`, `gusset`) or a rolled shape made of flat

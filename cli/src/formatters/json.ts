@@ -4,6 +4,8 @@
  * its own version.
  */
 import type { CalcError } from '../calc/types.js';
+import { codeLabel } from '../engine/codeLabel.js';
+import { designMethodOf } from '../engine/designMethodOf.js';
 import type { Chain, DirectionResult, Strength } from '../engine/types.js';
 import type { FileReport, LocatedFinding, MemberReport, RunReport } from '../runner/types.js';
 import { CAUTION } from '../runner/types.js';
@@ -152,7 +154,15 @@ function file(f: FileReport) {
     status: f.status,
     ...(f.project !== undefined ? { project: f.project } : {}),
     ...(f.units !== undefined ? { units: f.units } : {}),
-    ...(f.profile !== undefined ? { code: { standard: f.profile.standard, method: f.profile.method } } : {}),
+    ...(f.profile !== undefined
+      ? {
+          code: {
+            standard: f.profile.standard,
+            method: designMethodOf(f.profile),
+            label: codeLabel(f.profile),
+          },
+        }
+      : {}),
     memberCount: f.memberCount,
     errors: f.errors.map(inputError),
     members: f.members.map(member),

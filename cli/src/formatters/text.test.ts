@@ -50,3 +50,14 @@ describe('formatText writes every quantity with the unit and precision of its fi
     );
   });
 });
+
+describe('formatText names each code by its own design method (issue 10.11)', () => {
+  it('EN 1993-1-1 by its partial factors and CSA S16 as limit states design, never LRFD', async () => {
+    expect((await textOf('lantern-deck-en1993.json'))[0]).toBe(
+      'lantern-deck-en1993.json  (Harbour Lantern Footbridge · EN 1993-1-1, partial factors γM0 1.00, γM2 1.25 · mm)',
+    );
+    expect((await textOf('lantern-lap-csa.json'))[0]).toBe(
+      'lantern-lap-csa.json  (Harbour Lantern Footbridge · CSA S16-19, limit states design φ 0.90, φu 0.75 · mm)',
+    );
+  });
+});

@@ -5,7 +5,7 @@
 import type { CalcError } from '../calc/types.js';
 import type { MemberReport, RunReport, FileReport, LocatedFinding } from '../runner/types.js';
 import { CAUTION } from '../runner/types.js';
-import { formatQuantity, unitSymbol, type Dimension } from '../engine/index.js';
+import { codeLabel, formatQuantity, unitSymbol, type Dimension } from '../engine/index.js';
 import {
   chainLabel,
   columns,
@@ -118,7 +118,7 @@ function memberBlock(file: FileReport, m: MemberReport, report: RunReport, paint
 function fileHeader(file: FileReport): string {
   const parts: string[] = [];
   if (file.project) parts.push(file.project);
-  if (file.profile) parts.push(`${file.profile.standard} ${file.profile.method}`);
+  if (file.profile) parts.push(codeLabel(file.profile));
   if (file.units) parts.push(file.units);
   return parts.length > 0 ? `${file.file}  (${parts.join(' · ')})` : file.file;
 }

@@ -1127,10 +1127,18 @@ export interface components {
     CodeProfileDto: {
       /** @example AISC 360-22 */
       standard: string;
-      /** @enum {string} */
-      method: 'LRFD' | 'ASD';
+      /**
+       * @description The code's own design method: LRFD or ASD (AISC 360), partial-factor (EN 1993-1-1), LSD (CSA S16-19, limit states design)
+       * @enum {string}
+       */
+      method: 'LRFD' | 'ASD' | 'partial-factor' | 'LSD';
       /** @enum {string} */
       units: 'in' | 'mm';
+      /**
+       * @description Code and method as the reports name them
+       * @example EN 1993-1-1, partial factors γM0 1.00, γM2 1.25
+       */
+      label: string;
     };
     ChainSummaryDto: {
       holes: string[];

@@ -15,8 +15,18 @@ export class DirectionResultDto {
 
 export class CodeProfileDto {
   @ApiProperty({ example: 'AISC 360-22' }) standard: string;
-  @ApiProperty({ enum: ['LRFD', 'ASD'] }) method: string;
+  @ApiProperty({
+    enum: ['LRFD', 'ASD', 'partial-factor', 'LSD'],
+    description:
+      "The code's own design method: LRFD or ASD (AISC 360), partial-factor (EN 1993-1-1), LSD (CSA S16-19, limit states design)",
+  })
+  method: string;
   @ApiProperty({ enum: ['in', 'mm'] }) units: string;
+  @ApiProperty({
+    example: 'EN 1993-1-1, partial factors γM0 1.00, γM2 1.25',
+    description: 'Code and method as the reports name them',
+  })
+  label: string;
 }
 
 export class MemberResultDto {

@@ -116,3 +116,24 @@ describe('MemberPanel writes every number with its file’s unit and precision',
     ).toEqual(['186.7', '2988']);
   });
 });
+
+describe('MemberPanel names the code by its own design method (issue 10.11)', () => {
+  it('an EN 1993-1-1 file written to 1.0 with "LRFD" reads as partial factors, not LRFD', () => {
+    const text = readFileSync(`${process.cwd()}/../schema/examples/lantern-deck-en1993.json`, 'utf8').replace(
+      '"method": "partial-factor"',
+      '"method": "LRFD"',
+    );
+    const loaded = loadCalcText(text, 'lantern-deck-en1993.json');
+    if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('; '));
+    const member = loaded.document.members[0]!;
+    const result = analyseMember(member.input, loaded.document.profile, { k: 5 });
+    renderWithProviders(
+      <MemberPanel document={loaded.document} member={member} result={result} findings={[]} />,
+    );
+    expect(screen.getByText(/Checked to EN 1993-1-1, partial factors γM0 1\.00, γM2 1\.25\./)).toBeTruthy();
+    expect(screen.getByTestId('member-drawing').textContent).toContain(
+      'EN 1993-1-1, partial factors γM0 1.00, γM2 1.25',
+    );
+    expect(screen.getByTestId('member-drawing').textContent).not.toContain('LRFD');
+  });
+});

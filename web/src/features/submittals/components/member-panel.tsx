@@ -1,7 +1,7 @@
 import { makeStyles, Subtitle2, Text, tokens } from '@fluentui/react-components';
 import type { CalcDocument, CalcMember } from 'ligament/calc';
 import { buildDrawing } from 'ligament/draw';
-import type { MemberResult } from 'ligament/engine';
+import { codeLabel, type MemberResult } from 'ligament/engine';
 import { useMemo, useState } from 'react';
 import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
 import { EmptyState } from '@/components/states';
@@ -90,7 +90,7 @@ export function MemberPanel({ document, member, result, findings }: MemberPanelP
           <Text size={200} className={styles.legend}>
             Dashed lines are the governing fracture line for each load direction (labelled −x or +x with the
             net width). Hover or focus a chain in the tables below to trace it on the plate. Dimensions in{' '}
-            {units === 'in' ? 'inches' : 'millimetres'}.
+            {units === 'in' ? 'inches' : 'millimetres'}. Checked to {codeLabel(document.profile)}.
           </Text>
         </div>
         <div className={styles.block}>

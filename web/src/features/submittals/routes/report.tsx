@@ -13,7 +13,7 @@ import {
 } from '@fluentui/react-components';
 import { ArrowLeftRegular, PrintRegular } from '@fluentui/react-icons';
 import { buildDrawing } from 'ligament/draw';
-import { formatQuantity, type Dimension } from 'ligament/engine';
+import { codeLabel, formatQuantity, type Dimension } from 'ligament/engine';
 import { useNavigate, useParams } from 'react-router-dom';
 import { SeverityBadge } from '@/components/finding-badges';
 import { LogoMark } from '@/components/logo-mark';
@@ -156,6 +156,8 @@ export function Component() {
                   <MemberDrawing drawing={drawing} chains={[]} highlighted={null} />
                 </div>
                 <div className={styles.facts}>
+                  <Text>Code</Text>
+                  <Text>{codeLabel(file.document.profile)}</Text>
                   <Text>Ag / An / Ae</Text>
                   <Text>
                     {q(r.Ag, 'area')} / {q(r.An, 'area')} / {q(r.Ae, 'area')}
