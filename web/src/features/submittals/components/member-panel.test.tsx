@@ -18,6 +18,20 @@ function splicePlate() {
   return { document: loaded.document, member, result };
 }
 
+/** Renders the first member of a schema example (fictional Harbour Lantern files); `edit` changes the text first. */
+function renderExample(name: string, edit: (text: string) => string = (t) => t) {
+  const loaded = loadCalcText(
+    edit(readFileSync(`${process.cwd()}/../schema/examples/${name}`, 'utf8')),
+    name,
+  );
+  if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('; '));
+  const member = loaded.document.members[0]!;
+  const result = analyseMember(member.input, loaded.document.profile, { k: 5 });
+  renderWithProviders(
+    <MemberPanel document={loaded.document} member={member} result={result} findings={[]} />,
+  );
+}
+
 describe('MemberPanel', () => {
   it('draws the plate with one outline per hole and the governing fracture line', () => {
     const { document, member, result } = splicePlate();
@@ -52,14 +66,7 @@ describe('MemberPanel', () => {
 
   it('compares the block shear claim and names block shear as the governing limit state', () => {
     // The Harbour Lantern brace (fictional, schema/examples): block shear 81.1 kip governs, claimed so.
-    const brace = readFileSync(`${process.cwd()}/../schema/examples/lantern-brace-angle.json`, 'utf8');
-    const loaded = loadCalcText(brace, 'lantern-brace-angle.json');
-    if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('; '));
-    const member = loaded.document.members[0]!;
-    const result = analyseMember(member.input, loaded.document.profile, { k: 5 });
-    renderWithProviders(
-      <MemberPanel document={loaded.document} member={member} result={result} findings={[]} />,
-    );
+    renderExample('lantern-brace-angle.json');
     const block = screen.getByRole('row', { name: /^Block shear \(available\)/ });
     expect(within(block).getByText(/agrees/)).toBeTruthy();
     const governing = screen.getByRole('row', { name: /^Governing available strength, block shear/ });
@@ -69,16 +76,7 @@ describe('MemberPanel', () => {
 
 describe('MemberPanel writes every number with its file’s unit and precision', () => {
   function panelFor(example: string) {
-    const loaded = loadCalcText(
-      readFileSync(`${process.cwd()}/../schema/examples/${example}`, 'utf8'),
-      example,
-    );
-    if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('; '));
-    const member = loaded.document.members[0]!;
-    const result = analyseMember(member.input, loaded.document.profile, { k: 5 });
-    renderWithProviders(
-      <MemberPanel document={loaded.document} member={member} result={result} findings={[]} />,
-    );
+    renderExample(example);
     const claims = screen.getByRole('table', { name: 'Claimed against recomputed' });
     const cells = (label: RegExp) =>
       within(within(claims).getByRole('row', { name: label }))
@@ -119,16 +117,8 @@ describe('MemberPanel writes every number with its file’s unit and precision',
 
 describe('MemberPanel names the code by its own design method (issue 10.11)', () => {
   it('an EN 1993-1-1 file written to 1.0 with "LRFD" reads as partial factors, not LRFD', () => {
-    const text = readFileSync(`${process.cwd()}/../schema/examples/lantern-deck-en1993.json`, 'utf8').replace(
-      '"method": "partial-factor"',
-      '"method": "LRFD"',
-    );
-    const loaded = loadCalcText(text, 'lantern-deck-en1993.json');
-    if (!loaded.ok) throw new Error(loaded.errors.map((e) => e.message).join('; '));
-    const member = loaded.document.members[0]!;
-    const result = analyseMember(member.input, loaded.document.profile, { k: 5 });
-    renderWithProviders(
-      <MemberPanel document={loaded.document} member={member} result={result} findings={[]} />,
+    renderExample('lantern-deck-en1993.json', (t) =>
+      t.replace('"method": "partial-factor"', '"method": "LRFD"'),
     );
     expect(screen.getByText(/Checked to EN 1993-1-1, partial factors γM0 1\.00, γM2 1\.25\./)).toBeTruthy();
     expect(screen.getByTestId('member-drawing').textContent).toContain(
