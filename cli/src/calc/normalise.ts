@@ -1,4 +1,4 @@
-import { memberSection } from '../engine/memberSection.js';
+import { memberSection } from '../engine/member/memberSection.js';
 import { SectionError } from '../engine/sections/sectionError.js';
 import type { Section } from '../engine/sections/types.js';
 import { EngineError } from '../engine/engineError.js';
@@ -182,7 +182,7 @@ export function normaliseDocument(raw: Raw): { document: CalcDocument; issues: S
     let thickness =
       m['thickness'] !== undefined ? length(m['thickness'] as Len, `${mp}/thickness`) : Number.NaN;
     if (built) {
-      // Unfolded placement (sections/README.md §7): y = unfoldOffset ± u, u = datum + gauge.
+      // Unfolded placement (cli/src/engine/sections/README.md §7): y = unfoldOffset ± u, u = datum + gauge.
       let lo = Number.POSITIVE_INFINITY;
       let hi = Number.NEGATIVE_INFINITY;
       for (const e of built.elements) {

@@ -1,15 +1,15 @@
 import { EngineError } from './engineError.js';
-import { leastChains } from './leastChains.js';
-import { memberBlockShear } from './memberBlockShear.js';
-import { memberHoleWidth } from './memberHoleWidth.js';
-import { memberLayout } from './memberLayout.js';
-import { memberSection } from './memberSection.js';
-import { memberShearLag } from './memberShearLag.js';
+import { leastChains } from './chains/leastChains.js';
+import { memberBlockShear } from './strength/memberBlockShear.js';
+import { memberHoleWidth } from './holes/memberHoleWidth.js';
+import { memberLayout } from './member/memberLayout.js';
+import { memberSection } from './member/memberSection.js';
+import { memberShearLag } from './net-area/memberShearLag.js';
 import type { ProfileStrength } from './profiles/types.js';
 import { analyseSection } from './sections/analyseSection.js';
 import type { SectionChain, SectionLayout } from './sections/types.js';
-import { shareCheck } from './shareCheck.js';
-import { tensionProfileOf } from './tensionProfileOf.js';
+import { shareCheck } from './chains/shareCheck.js';
+import { tensionProfileOf } from './strength/tensionProfileOf.js';
 import type {
   AnalyseOptions,
   Chain,

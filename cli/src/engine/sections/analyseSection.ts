@@ -18,8 +18,8 @@ export interface AnalyseSectionOptions {
 /**
  * Net section of a member made of flat elements: unfolds it, finds the k least admissible chains per
  * load direction by net area, and takes An = min(least chain, Ag) per direction (cli/docs/method.md §3–4) and
- * over directions. Shear lag, strengths and block shear are separate steps (../shear-lag,
- * ../profiles, ../block-shear).
+ * over directions. Shear lag, strengths and block shear are separate steps (../net-area/shear-lag,
+ * ../profiles, ../strength/block-shear).
  *
  * @param section - the section
  * @param holes - the holes with gauges as detailers give them and their deducted widths

@@ -1,4 +1,4 @@
-import { segmentDistance } from '../segmentDistance.js';
+import { segmentDistance } from '../geometry/segmentDistance.js';
 import { chainLegPairs } from './chainLegPairs.js';
 import { legProjection, sectionLineAt } from './sectionLinePoint.js';
 import type { SectionLayout } from './types.js';
