@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import type { CalcMember } from '../calc/types.js';
 import { analyseMember } from './analyseMember.js';
 import { auditMember } from './findings/auditMember.js';
 import type { CodeProfile, MemberInput } from './types.js';
+import type { CalcMember } from './findings/types.js';
 
 const EN: CodeProfile = { standard: 'EN 1993-1-1', method: 'LRFD', units: 'mm' };
 

@@ -1,6 +1,7 @@
 // The net-section engine: pure functions, numbers in, typed results out. Re-exported one by one so
 // the public surface is visible here.
 export type * from './types.js';
+export type * from './findings/types.js';
 export { EngineError, type EngineErrorCode } from './engineError.js';
 export { ENGINE_VERSION } from './engineVersion.js';
 export { FINDING_CATALOGUE } from './findings/findingCatalogue.js';
@@ -27,7 +28,7 @@ export { analyseMember } from './analyseMember.js';
 export { inspectLayout } from './holes/inspectLayout.js';
 export { detailingFindings } from './findings/detailingFindings.js';
 export { grazingFindings } from './findings/grazingFindings.js';
-export { withinTolerance, DEFAULT_TOLERANCE, type ToleranceSpec } from './findings/withinTolerance.js';
+export { withinTolerance, DEFAULT_TOLERANCE } from './findings/withinTolerance.js';
 export { formatQuantity, type Dimension } from './findings/formatQuantity.js';
 export { formatDirection } from './findings/formatDirection.js';
 export { auditMember } from './findings/auditMember.js';

@@ -361,47 +361,6 @@ export interface MemberBlockShear {
   readonly outlines: readonly MemberBlockOutline[];
 }
 
-export type Severity = 'error' | 'warning' | 'note';
-
-/**
- * Finding classes, in the order a checker reads them. `overstated`: the submission claims more area
- * or strength than the recomputation gives (unsafe). `understated`: it claims less (conservative).
- * `missed-chain`: the governing chain was not among those claimed. `phantom-chain`: a claimed chain
- * cannot form for the load direction, or does not exist. `chain-width`: a claimed chain's net width
- * differs. `equal-share`: the equal-share check falls below the full-load An. `detailing`: hole
- * layout, spacing and edge distance. `input`: the file itself.
- */
-export type FindingClass =
-  | 'overstated'
-  | 'understated'
-  | 'missed-chain'
-  | 'phantom-chain'
-  | 'chain-width'
-  | 'equal-share'
-  | 'detailing'
-  | 'input';
-
-export interface Finding {
-  /** Stable code of our own, e.g. `LG101`. */
-  readonly code: string;
-  /** Stable kebab-case name of the code, e.g. `overstated-net-area`. */
-  readonly name: string;
-  readonly class: FindingClass;
-  readonly severity: Severity;
-  readonly memberId?: string;
-  readonly direction?: LoadDirection;
-  /** Hole ids of the chain concerned, if any. */
-  readonly chain?: readonly string[];
-  /** Hole ids concerned (detailing). */
-  readonly holes?: readonly string[];
-  readonly claimed?: number;
-  readonly recomputed?: number;
-  /** One line an engineer would accept, with the numbers. */
-  readonly message: string;
-  /** JSON pointer into the calc file of the value the finding is about. */
-  readonly pointer: string;
-}
-
 /**
  * A hole placed in a member, reduced to what the chain search needs: its position, its index in the
  * member's `holes` array (for JSON pointers) and the width it deducts (see {@link HoleWidth}).
@@ -465,16 +424,4 @@ export interface InputIssue {
   readonly pointer: string;
   /** Hole ids concerned. */
   readonly holes: readonly string[];
-}
-
-/** One entry of the finding catalogue: what a code means, for SARIF rules, docs and the dashboard. */
-export interface FindingRule {
-  readonly code: string;
-  readonly name: string;
-  readonly class: FindingClass;
-  /** Default severity; some codes are raised or lowered case by case (see `help`). */
-  readonly severity: Severity;
-  readonly title: string;
-  /** Two or three sentences for an engineer. */
-  readonly help: string;
 }

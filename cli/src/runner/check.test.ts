@@ -3,7 +3,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { checkSource, exitCodeFor, runCheck, summarise } from './check.js';
 import { sourceError, type Source } from './source.js';
-import { DEFAULT_TOLERANCE } from './tolerance.js';
+import { DEFAULT_COMMAND_LINE_TOLERANCE } from './tolerance.js';
 import type { CheckSettings } from './types.js';
 
 const example = (name: string): Source => ({
@@ -11,7 +11,7 @@ const example = (name: string): Source => ({
   text: readFileSync(fileURLToPath(new URL(`../../../schema/examples/${name}`, import.meta.url)), 'utf8'),
 });
 const settings = (over: Partial<CheckSettings> = {}): CheckSettings => ({
-  tolerance: DEFAULT_TOLERANCE,
+  tolerance: DEFAULT_COMMAND_LINE_TOLERANCE,
   failOn: 'overstated',
   k: 10,
   ...over,

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import pkg from '../../../package.json' with { type: 'json' };
-import type { CalcDocument } from '../../calc/types.js';
 import { auditCalc } from './auditCalc.js';
 import type { HoleInput, MemberInput } from '../types.js';
+import type { AuditedCalc } from './types.js';
 
 const bolt = (id: string, x: number, y: number): HoleInput => ({
   id,
@@ -22,10 +22,7 @@ const d9: MemberInput = {
   holes: [bolt('A1', 0, 2), bolt('B1', 2.5, 5), bolt('C1', 2.5, 9), bolt('D1', 0, 12)],
 };
 
-const doc: CalcDocument = {
-  format: 'ligament-calc',
-  formatVersion: '1.0',
-  meta: { project: 'Harbour Lantern Footbridge', preparedBy: 'Priya Halvorsen', date: '2026-11-20' },
+const doc: AuditedCalc = {
   profile: { standard: 'AISC 360-22', method: 'LRFD', units: 'in' },
   members: [
     { index: 0, input: d9, claims: { An: 5.75 } },

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import type { CalcMember, MemberClaims } from '../../calc/types.js';
 import { auditMember } from './auditMember.js';
 import type { CodeProfile, HoleInput, MemberInput } from '../types.js';
+import type { CalcMember, MemberClaims } from './types.js';
 
 const profile: CodeProfile = { standard: 'AISC 360-22', method: 'LRFD', units: 'in' };
 const bolt = (id: string, x: number, y: number): HoleInput => ({

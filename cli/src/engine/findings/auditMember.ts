@@ -1,4 +1,3 @@
-import type { AuditOptions, CalcMember, ClaimedChain, MemberAudit, MemberClaims } from '../../calc/types.js';
 import { analyseMember } from '../analyseMember.js';
 import { detailingFindings } from './detailingFindings.js';
 import { grazingFindings } from './grazingFindings.js';
@@ -9,16 +8,18 @@ import { makeFinding } from './makeFinding.js';
 import { memberChainTools } from '../member/memberChainTools.js';
 import { profileDetailingFindings } from './profileDetailingFindings.js';
 import { sectionDetailingFindings } from './sectionDetailingFindings.js';
-import { withinTolerance, DEFAULT_TOLERANCE, type ToleranceSpec } from './withinTolerance.js';
+import { withinTolerance, DEFAULT_TOLERANCE } from './withinTolerance.js';
+import type { Chain, CodeProfile, LoadDirection, MemberBlockOutline, MemberResult } from '../types.js';
 import type {
-  Chain,
-  CodeProfile,
+  AuditOptions,
+  CalcMember,
+  ClaimedChain,
   Finding,
   FindingClass,
-  LoadDirection,
-  MemberBlockOutline,
-  MemberResult,
-} from '../types.js';
+  MemberAudit,
+  MemberClaims,
+  Tolerance,
+} from './types.js';
 
 type ScalarClaim = Exclude<keyof MemberClaims, 'chains' | 'controllingChain'>;
 
@@ -70,7 +71,7 @@ const BLOCK_AREAS = ['Agv', 'Anv', 'Agt', 'Ant'] as const;
 function claimedOutline(
   result: MemberResult,
   claims: MemberClaims,
-  tolerance: ToleranceSpec,
+  tolerance: Tolerance,
 ): MemberBlockOutline | undefined {
   const block = result.blockShear;
   if (!block) return undefined;

@@ -1,7 +1,8 @@
 import { formatQuantity } from './formatQuantity.js';
 import { makeFinding } from './makeFinding.js';
 import { edgeMinimum } from './edgeMinimum.js';
-import type { CodeProfile, Finding, MemberInput, MemberResult } from '../types.js';
+import type { CodeProfile, MemberInput, MemberResult } from '../types.js';
+import type { Finding } from './types.js';
 
 /**
  * Detailing findings a checker also looks at (cli/docs/method.md §7):

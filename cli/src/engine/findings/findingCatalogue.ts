@@ -1,4 +1,4 @@
-import type { FindingRule } from '../types.js';
+import type { FindingRule } from './types.js';
 
 /**
  * Every finding code the engine can raise, in the order a checker reads them. Codes and names are

@@ -1,6 +1,6 @@
 import { EngineError } from '../engineError.js';
 import { FINDING_CATALOGUE } from './findingCatalogue.js';
-import type { FindingRule } from '../types.js';
+import type { FindingRule } from './types.js';
 
 const BY_CODE = new Map(FINDING_CATALOGUE.map((rule) => [rule.code, rule] as const));
 

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import type { CalcMember } from '../../calc/types.js';
 import { analyseMember } from '../analyseMember.js';
 import { auditMember } from './auditMember.js';
 import { grazingFindings } from './grazingFindings.js';
 import type { CodeProfile, HoleInput, MemberInput } from '../types.js';
+import type { CalcMember } from './types.js';
 
 const AISC: CodeProfile = { standard: 'AISC 360-22', method: 'LRFD', units: 'in' };
 const EN: CodeProfile = { standard: 'EN 1993-1-1', method: 'LRFD', units: 'mm' };

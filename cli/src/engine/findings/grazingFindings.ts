@@ -4,7 +4,8 @@ import { makeFinding } from './makeFinding.js';
 import { memberUnfolded } from '../member/memberChainTools.js';
 import { segmentDistance, type Point } from '../geometry/segmentDistance.js';
 import { sectionLineDistances } from '../sections/sectionLineDistances.js';
-import type { CodeProfile, Finding, MemberInput, MemberResult } from '../types.js';
+import type { CodeProfile, MemberInput, MemberResult } from '../types.js';
+import type { Finding } from './types.js';
 
 /**
  * Distance from each hole to a plate chain's fracture line: straight across at the first hole's x

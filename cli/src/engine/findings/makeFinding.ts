@@ -1,5 +1,5 @@
 import { findingRule } from './findingRule.js';
-import type { Finding, Severity } from '../types.js';
+import type { Finding, Severity } from './types.js';
 
 /** Everything of a finding but what the catalogue supplies; `severity` overrides the default. */
 export type FindingDetails = Omit<Finding, 'code' | 'name' | 'class' | 'severity'> & {

@@ -2,7 +2,8 @@ import { elementHoleGroups } from '../member/elementHoleGroups.js';
 import { makeFinding } from './makeFinding.js';
 import { holeSpacings } from '../profiles/holeSpacings.js';
 import { tensionProfileOf } from '../strength/tensionProfileOf.js';
-import type { CodeProfile, Finding, MemberInput, MemberResult } from '../types.js';
+import type { CodeProfile, MemberInput, MemberResult } from '../types.js';
+import type { Finding } from './types.js';
 
 /**
  * Detailing under the EN 1993-1-1 and CSA S16-19 profiles, per flat element: EN 1993-1-8 Table 3.3

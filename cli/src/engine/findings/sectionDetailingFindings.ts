@@ -2,7 +2,8 @@ import { elementHoleGroups } from '../member/elementHoleGroups.js';
 import { formatQuantity } from './formatQuantity.js';
 import { makeFinding } from './makeFinding.js';
 import { edgeMinimum } from './edgeMinimum.js';
-import type { CodeProfile, Finding, MemberInput, MemberResult } from '../types.js';
+import type { CodeProfile, MemberInput, MemberResult } from '../types.js';
+import type { Finding } from './types.js';
 
 /**
  * AISC 360 detailing of a section member, measured within each element (cli/docs/method.md §7): LG201 spacing

@@ -1,15 +1,8 @@
 import type { Dimension } from './formatQuantity.js';
-
-/** Comparison tolerance (the same shape as the calc layer's `Tolerance`). */
-export interface ToleranceSpec {
-  /** Relative tolerance, 0.005 = 0.5 %. */
-  readonly relative: number;
-  /** Absolute tolerances by dimension; when given they replace `relative` for that dimension. */
-  readonly absolute?: { readonly length?: number; readonly area?: number; readonly force?: number };
-}
+import type { Tolerance } from './types.js';
 
 /** Default comparison tolerance: 0.5 % relative. */
-export const DEFAULT_TOLERANCE: ToleranceSpec = { relative: 0.005 };
+export const DEFAULT_TOLERANCE: Tolerance = { relative: 0.005 };
 
 /**
  * Whether a claimed value agrees with the recomputed one: |claimed − recomputed| ≤ the absolute
@@ -29,7 +22,7 @@ export function withinTolerance(
   claimed: number,
   recomputed: number,
   dimension: Dimension,
-  tolerance: ToleranceSpec = DEFAULT_TOLERANCE,
+  tolerance: Tolerance = DEFAULT_TOLERANCE,
 ): boolean {
   const absolute = dimension === 'ratio' ? undefined : tolerance.absolute?.[dimension];
   const allowed = absolute ?? tolerance.relative * Math.abs(recomputed);
