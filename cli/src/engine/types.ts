@@ -12,6 +12,7 @@
  * Coordinates: `x` runs along the load axis, `y` across the width from one longitudinal edge,
  * 0 ≤ y ≤ width.
  */
+import type { SectionGrossArea, SectionLayout } from './sections/types.js';
 
 /** Unit system of a calc file. */
 export type UnitSystem = 'in' | 'mm';
@@ -424,4 +425,33 @@ export interface InputIssue {
   readonly pointer: string;
   /** Hole ids concerned. */
   readonly holes: readonly string[];
+}
+
+/**
+ * A member built once for an analysis or an audit (member/memberModel.ts): its input and profile, the
+ * width every hole deducts, and what the chain searches work on: a plate's hole layout, or a rolled
+ * shape's unfolded section with its gross area. The analysis, the claimed-chain tools, and the
+ * grazing and detailing findings all take this one value, so nothing is built twice.
+ */
+export type MemberModel = PlateModel | SectionModel;
+
+interface BuiltMember {
+  readonly input: MemberInput;
+  readonly profile: CodeProfile;
+  /** Width each hole deducts, in hole order (holes/memberHoleWidth.ts). */
+  readonly holeWidths: readonly HoleWidth[];
+}
+
+/** A plate (`plate`, `splice-plate`, `gusset`) as the chain searches see it. */
+export interface PlateModel extends BuiltMember {
+  readonly layout: HoleLayout;
+  readonly unfolded?: undefined;
+}
+
+/** A rolled shape unfolded into flat elements (cli/src/engine/sections/README.md). */
+export interface SectionModel extends BuiltMember {
+  readonly unfolded: SectionLayout;
+  /** Gross area from the elements and as tabulated; `used` is Ag. */
+  readonly grossArea: SectionGrossArea;
+  readonly layout?: undefined;
 }

@@ -1,4 +1,5 @@
-import { analyseMember } from '../analyseMember.js';
+import { analyseModel } from '../analyseModel.js';
+import { memberModel } from '../member/memberModel.js';
 import { detailingFindings } from './detailingFindings.js';
 import { grazingFindings } from './grazingFindings.js';
 import { formatDirection } from './formatDirection.js';
@@ -159,12 +160,14 @@ export function auditMember(
   const base = `/members/${calcMember.index}`;
   const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
   const u = profile.units;
-  const result = analyseMember(member, profile, {
+  // The member is built once; the analysis, the claimed-chain tools, grazing and detailing share it.
+  const model = memberModel(member, profile);
+  const result = analyseModel(model, {
     k: options.k ?? 10,
     ...(options.directions ? { directions: options.directions } : {}),
   });
   const directions = result.directions.map((d) => d.direction);
-  const tools = memberChainTools(member, profile, result.holeWidths);
+  const tools = memberChainTools(model);
   const findings: Finding[] = [];
   const at = { memberId: member.id };
 
@@ -406,14 +409,14 @@ export function auditMember(
   }
 
   if (profile.standard === 'EN 1993-1-1' || profile.standard === 'CSA S16-19') {
-    findings.push(...profileDetailingFindings(member, profile, result, base));
+    findings.push(...profileDetailingFindings(model, base));
   } else if (member.section) {
-    findings.push(...sectionDetailingFindings(member, profile, result, base));
+    findings.push(...sectionDetailingFindings(model, base));
   } else {
-    findings.push(...detailingFindings(member, profile, result, base));
+    findings.push(...detailingFindings(model, base));
   }
   // The grazing check is geometric, not a code rule: made on every member under every profile.
-  findings.push(...grazingFindings(member, profile, result, base));
+  findings.push(...grazingFindings(model, result, base));
 
   const rank = new Map(CLASS_ORDER.map((c, i) => [c, i] as const));
   const ordered = findings

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyseMember } from '../analyseMember.js';
+import { memberModel } from '../member/memberModel.js';
 import { detailingFindings } from './detailingFindings.js';
 import type { CodeProfile, HoleInput, MemberInput } from '../types.js';
 
@@ -21,8 +21,7 @@ const plate = (width: number, holes: HoleInput[]): MemberInput => ({
   directions: ['-x'],
   holes,
 });
-const run = (m: MemberInput, profile = IN) =>
-  detailingFindings(m, profile, analyseMember(m, profile), '/members/0');
+const run = (m: MemberInput, profile = IN) => detailingFindings(memberModel(m, profile), '/members/0');
 
 describe('detailingFindings', () => {
   it('finds nothing in the D.9 layout (AISC Design Examples v13.0 D.9 geometry)', () => {

@@ -1,7 +1,7 @@
 import { formatQuantity } from './formatQuantity.js';
 import { makeFinding } from './makeFinding.js';
 import { edgeMinimum } from './edgeMinimum.js';
-import type { CodeProfile, MemberInput, MemberResult } from '../types.js';
+import type { MemberModel } from '../types.js';
 import type { Finding } from './types.js';
 
 /**
@@ -16,21 +16,15 @@ import type { Finding } from './types.js';
  * every member by grazingFindings, called beside this from auditMember.
  * Holes given only by an explicit dimension (no bolt) are skipped for LG201 and LG202.
  *
- * @param member - the member
- * @param profile - units for the tables
- * @param result - the member's analysis (for the governing chains)
+ * @param model - the member model (a plate: its holes and width; the profile's units and edition)
  * @param memberPointer - JSON pointer of the member, prefixed to each finding's pointer
  * @returns the findings
  * @example
  * // two 3/4 in bolts 1.75 in apart: 2-2/3 · 0.75 = 2.00 in
- * detailingFindings(member, profile, result, '/members/0')[0]?.code // → 'LG201'
+ * detailingFindings(memberModel(member, aisc), '/members/0')[0]?.code // → 'LG201'
  */
-export function detailingFindings(
-  member: MemberInput,
-  profile: CodeProfile,
-  result: MemberResult,
-  memberPointer = '',
-): Finding[] {
+export function detailingFindings(model: MemberModel, memberPointer = ''): Finding[] {
+  const { input: member, profile } = model;
   const findings: Finding[] = [];
   const u = profile.units;
   const holes = member.holes;

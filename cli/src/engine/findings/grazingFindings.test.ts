@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyseMember } from '../analyseMember.js';
 import { auditMember } from './auditMember.js';
 import { grazingFindings } from './grazingFindings.js';
+import { memberModel } from '../member/memberModel.js';
 import type { CodeProfile, HoleInput, MemberInput } from '../types.js';
 import type { CalcMember } from './types.js';
 
@@ -69,7 +70,7 @@ describe('grazingFindings on plates (LG203)', () => {
     const m = plate(10, [bolt('A', 0, 2), bolt('E', 0, 5), slot, bolt('C', 0, 8)]);
     const r = analyseMember(m, IN);
     expect(r.directions[0]!.governing!.holes).toEqual(['A', 'E', 'C']);
-    const found = grazingFindings(m, IN, r, '/members/0').filter((f) => f.code === 'LG203');
+    const found = grazingFindings(memberModel(m, IN), r, '/members/0').filter((f) => f.code === 'LG203');
     expect(found).toEqual([
       expect.objectContaining({
         holes: ['B'],
@@ -84,7 +85,7 @@ describe('grazingFindings on plates (LG203)', () => {
 
   it('does not flag a round hole the line passes at more than its radius', () => {
     const m = plate(10, [bolt('A', 0, 2), bolt('E', 0, 5), bolt('B', 0.85, 5), bolt('C', 0, 8)]);
-    expect(grazingFindings(m, IN, analyseMember(m, IN), '/members/0')).toEqual([]);
+    expect(grazingFindings(memberModel(m, IN), analyseMember(m, IN), '/members/0')).toEqual([]);
   });
 });
 
@@ -102,7 +103,7 @@ describe('grazingFindings on sections (LG203, measured on the unfolded section)'
     const r = analyseMember(m, AISC);
     expect(r.directions[0]!.governing!.holes).toEqual(['A', 'F']);
     expect(r.directions[0]!.An).toBeCloseTo(3.75 - 0.875 + 9 / 28, 9);
-    const found = grazingFindings(m, AISC, r, '/members/0');
+    const found = grazingFindings(memberModel(m, AISC), r, '/members/0');
     expect(found).toEqual([
       expect.objectContaining({
         code: 'LG203',
@@ -127,7 +128,7 @@ describe('grazingFindings on sections (LG203, measured on the unfolded section)'
     const m = angleMember(1.4);
     const r = analyseMember(m, AISC);
     expect(r.directions[0]!.governing!.holes).toEqual(['A', 'F']);
-    expect(grazingFindings(m, AISC, r, '/members/0')).toEqual([]);
+    expect(grazingFindings(memberModel(m, AISC), r, '/members/0')).toEqual([]);
   });
 
   it('is made under the EN 1993-1-1 profile as well (a geometric check, not a code rule)', () => {

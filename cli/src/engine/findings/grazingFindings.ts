@@ -1,10 +1,9 @@
 import { formatDirection } from './formatDirection.js';
 import { formatQuantity } from './formatQuantity.js';
 import { makeFinding } from './makeFinding.js';
-import { memberUnfolded } from '../member/memberChainTools.js';
 import { segmentDistance, type Point } from '../geometry/segmentDistance.js';
 import { sectionLineDistances } from '../sections/sectionLineDistances.js';
-import type { CodeProfile, MemberInput, MemberResult } from '../types.js';
+import type { MemberInput, MemberModel, MemberResult } from '../types.js';
 import type { Finding } from './types.js';
 
 /**
@@ -52,25 +51,20 @@ function plateLineDistances(
  * check is geometric and made under every code profile. Pointers name the hole in the member's
  * `holes` array.
  *
- * @param member - the member
- * @param profile - units for the messages
- * @param result - its analysis (governing chains, hole widths)
+ * @param model - the member model (holes, their widths, a section's unfolded layout, units)
+ * @param result - its analysis (the governing chains)
  * @param memberPointer - the member's JSON pointer
  * @returns the findings, by direction then hole order
  * @example
  * // chain A–E–C straight at x 0; a long slot B (radius 0.96875 in) on E's gauge line 0.85 in along
- * grazingFindings(member, aisc, result, '/members/0')[0]?.pointer // → '/members/0/holes/2'
+ * grazingFindings(memberModel(member, aisc), result, '/members/0')[0]?.pointer // → '/members/0/holes/2'
  */
-export function grazingFindings(
-  member: MemberInput,
-  profile: CodeProfile,
-  result: MemberResult,
-  memberPointer = '',
-): Finding[] {
+export function grazingFindings(model: MemberModel, result: MemberResult, memberPointer = ''): Finding[] {
+  const { input: member, profile } = model;
   const findings: Finding[] = [];
   const u = profile.units;
-  const radii = result.holeWidths.map((w) => w.deducted / 2);
-  const layout = member.section ? memberUnfolded(member, result.holeWidths) : undefined;
+  const radii = model.holeWidths.map((w) => w.deducted / 2);
+  const layout = model.unfolded;
   const position = new Map((layout?.holes ?? []).map((h, i) => [h.id, i] as const));
   const eps = layout ? layout.tolerance : 1e-9 * Math.max(1, member.width);
   const seen = new Set<string>();

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { analyseMember } from '../analyseMember.js';
+import { memberModel } from '../member/memberModel.js';
 import { profileDetailingFindings } from './profileDetailingFindings.js';
 import type { CodeProfile, MemberInput } from '../types.js';
 
@@ -17,7 +17,7 @@ const plate = (width: number, holes: readonly (readonly [number, number])[]): Me
 });
 
 const codes = (m: MemberInput, profile: CodeProfile) =>
-  profileDetailingFindings(m, profile, analyseMember(m, profile), '/members/0').map((f) => f.code);
+  profileDetailingFindings(memberModel(m, profile), '/members/0').map((f) => f.code);
 
 describe('profileDetailingFindings: no warnings on good details', () => {
   // Staggered M20 pattern: lines at y 40 and 70 (30 mm apart), holes at x 0 and 100 on the first and

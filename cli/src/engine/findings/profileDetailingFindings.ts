@@ -2,7 +2,7 @@ import { elementHoleGroups } from '../member/elementHoleGroups.js';
 import { makeFinding } from './makeFinding.js';
 import { holeSpacings } from '../profiles/holeSpacings.js';
 import { tensionProfileOf } from '../strength/tensionProfileOf.js';
-import type { CodeProfile, MemberInput, MemberResult } from '../types.js';
+import type { MemberModel } from '../types.js';
 import type { Finding } from './types.js';
 
 /**
@@ -16,25 +16,20 @@ import type { Finding } from './types.js';
  * the least pitch along a gauge line, p2 the least spacing of adjacent gauge lines, L the least
  * centre-to-centre distance.
  *
- * @param member - the member
- * @param profile - an EN 1993-1-1 or CSA S16-19 profile (others give no findings)
- * @param result - its analysis (hole widths)
+ * @param model - the member model, under an EN 1993-1-1 or CSA S16-19 profile (others give no
+ *   findings)
  * @param memberPointer - the member's JSON pointer
  * @returns the findings
  * @example
  * // EN plate, M20 (d0 22) holes 40 mm apart along the load: p1 40 < 2.2·22 = 48.4 → LG204
- * profileDetailingFindings(member, en, result, '/members/0')[0]?.code // → 'LG204'
+ * profileDetailingFindings(memberModel(member, en), '/members/0')[0]?.code // → 'LG204'
  */
-export function profileDetailingFindings(
-  member: MemberInput,
-  profile: CodeProfile,
-  result: MemberResult,
-  memberPointer = '',
-): Finding[] {
+export function profileDetailingFindings(model: MemberModel, memberPointer = ''): Finding[] {
+  const { input: member, profile } = model;
   const tension = tensionProfileOf(profile);
   if (!tension) return [];
   const findings: Finding[] = [];
-  for (const group of elementHoleGroups(member, result.holeWidths)) {
+  for (const group of elementHoleGroups(model)) {
     const holes = group.holes;
     if (holes.length === 0) continue;
     const spacings = holeSpacings(holes, group.width);

@@ -2,7 +2,7 @@ import { elementHoleGroups } from '../member/elementHoleGroups.js';
 import { formatQuantity } from './formatQuantity.js';
 import { makeFinding } from './makeFinding.js';
 import { edgeMinimum } from './edgeMinimum.js';
-import type { CodeProfile, MemberInput, MemberResult } from '../types.js';
+import type { MemberModel } from '../types.js';
 import type { Finding } from './types.js';
 
 /**
@@ -14,24 +14,18 @@ import type { Finding } from './types.js';
  * element's centreline end, so the toe distance is `a − gauge` exactly. LG203 is measured on the
  * unfolded section by grazingFindings, called beside this from auditMember.
  *
- * @param member - the section member
- * @param profile - units for the tables
- * @param result - its analysis (hole widths)
+ * @param model - the section member's model (its unfolded holes and widths; the profile's units)
  * @param memberPointer - the member's JSON pointer
  * @returns the findings
  * @example
  * // L4x4x1/2 leg with 3/4 in bolts at 1.5 in pitch: 1.5 < 2.00 → LG201
- * sectionDetailingFindings(member, aisc, result, '/members/0')[0]?.code // → 'LG201'
+ * sectionDetailingFindings(memberModel(member, aisc), '/members/0')[0]?.code // → 'LG201'
  */
-export function sectionDetailingFindings(
-  member: MemberInput,
-  profile: CodeProfile,
-  result: MemberResult,
-  memberPointer = '',
-): Finding[] {
+export function sectionDetailingFindings(model: MemberModel, memberPointer = ''): Finding[] {
+  const { input: member, profile } = model;
   const findings: Finding[] = [];
   const u = profile.units;
-  for (const group of elementHoleGroups(member, result.holeWidths)) {
+  for (const group of elementHoleGroups(model)) {
     const eps = 1e-9 * Math.max(1, group.width);
     const holes = group.holes;
     for (let p = 0; p < holes.length; p++) {

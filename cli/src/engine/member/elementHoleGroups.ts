@@ -1,5 +1,4 @@
-import { memberUnfolded } from './memberChainTools.js';
-import type { HoleWidth, MemberInput } from '../types.js';
+import type { MemberModel } from '../types.js';
 
 /** The holes of one flat element, in the element's own coordinates. */
 export interface ElementHoleGroup {
@@ -26,14 +25,14 @@ export interface ElementHoleGroup {
  * one element: a plate is one group with two free edges; a section's element has free edges where no
  * junction attaches (an angle's toe, a flange's tips; never a web).
  *
- * @param member - the member
- * @param holeWidths - widths in hole order
+ * @param model - the member model (a plate's holes, or a section's unfolded holes, with their widths)
  * @returns one group per element with holes, in element order
  * @example
- * elementHoleGroups(plate14, widths)[0]?.free // → { low: true, high: true }
+ * elementHoleGroups(memberModel(plate14, aisc))[0]?.free // → { low: true, high: true }
  */
-export function elementHoleGroups(member: MemberInput, holeWidths: readonly HoleWidth[]): ElementHoleGroup[] {
-  if (!member.section) {
+export function elementHoleGroups(model: MemberModel): ElementHoleGroup[] {
+  const { input: member, holeWidths } = model;
+  if (!model.unfolded) {
     return [
       {
         element: 'plate',
@@ -51,7 +50,7 @@ export function elementHoleGroups(member: MemberInput, holeWidths: readonly Hole
       },
     ];
   }
-  const layout = memberUnfolded(member, holeWidths);
+  const layout = model.unfolded;
   const eps = layout.tolerance;
   return layout.section.elements.flatMap((e) => {
     const holes = layout.holes.filter((h) => h.element === e.id);

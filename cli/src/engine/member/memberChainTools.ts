@@ -1,22 +1,11 @@
-import { analyseSection } from '../sections/analyseSection.js';
 import { chainDefect } from '../chains/chainDefect.js';
 import { chainOf } from '../chains/chainOf.js';
 import { chainRejection } from '../chains/chainRejection.js';
-import { memberLayout } from './memberLayout.js';
-import { memberSection } from './memberSection.js';
+import { sectionChainAsChain } from '../net-area/sectionChainAsChain.js';
 import { SectionError } from '../sections/sectionError.js';
 import { sectionChain } from '../sections/sectionChain.js';
 import { sectionRejection } from '../sections/sectionRejection.js';
-import type { SectionLayout } from '../sections/types.js';
-import type {
-  Chain,
-  ChainDefect,
-  ChainRejection,
-  CodeProfile,
-  HoleWidth,
-  LoadDirection,
-  MemberInput,
-} from '../types.js';
+import type { Chain, ChainDefect, ChainRejection, LoadDirection, MemberModel } from '../types.js';
 
 /** What the claims comparison needs to judge a claimed chain, for plates and sections alike. */
 export interface MemberChainTools {
@@ -28,54 +17,29 @@ export interface MemberChainTools {
   rejection(chain: Chain, direction: LoadDirection): ChainRejection | null;
 }
 
-/** The unfolded section of a section member (no chain search). */
-export function memberUnfolded(member: MemberInput, holeWidths: readonly HoleWidth[]): SectionLayout {
-  const spec = member.section!;
-  return analyseSection(
-    memberSection(spec),
-    member.holes.map((h, i) => ({
-      id: h.id,
-      element: h.element ?? '',
-      x: h.x,
-      gauge: h.gauge ?? 0,
-      deducted: holeWidths[i]!.deducted,
-    })),
-    {
-      k: 1,
-      directions: ['-x'],
-      ...(spec.tabulatedAg !== undefined ? { tabulatedAg: spec.tabulatedAg } : {}),
-    },
-  ).layout;
-}
-
 /**
- * Chain tools for a member: the plate's (chainDefect, chainOf, chainRejection on the hole layout),
- * or for a section member the section's (sectionChain, sectionRejection on the unfolded section), the
- * section chain given in the plate shape (net width at the member's thickness, see analyseMember).
+ * Chain tools for a member: the plate's (chainDefect, chainOf, chainRejection on its hole layout), or
+ * for a section member the section's (sectionChain, sectionRejection on its unfolded section), the
+ * section chain given in the plate shape ({@link sectionChainAsChain}).
  *
- * @param member - the member
- * @param profile - the file's code profile
- * @param holeWidths - deducted widths in hole order
+ * @param model - the member model
  * @returns the tools
  * @example
- * memberChainTools(d9, aisc, widths).of(['A', 'B', 'C', 'D']).netWidth // → 11.5417
+ * // AISC Design Examples v13.0 D.9 (conformance/SOURCES.md R1): 14 − 4 · 0.875 + 2 · 2.5²/(4 · 3)
+ * memberChainTools(memberModel(d9, aisc)).of(['A', 'B', 'C', 'D']).netWidth // → 11.5417
  */
-export function memberChainTools(
-  member: MemberInput,
-  profile: CodeProfile,
-  holeWidths: readonly HoleWidth[],
-): MemberChainTools {
-  if (!member.section) {
-    const layout = memberLayout(member, profile, holeWidths);
+export function memberChainTools(model: MemberModel): MemberChainTools {
+  if (!model.unfolded) {
+    const layout = model.layout;
     return {
       defect: (ids) => chainDefect(layout, ids),
       of: (ids) => chainOf(layout, ids),
       rejection: (chain, d) => chainRejection(chain, layout, d),
     };
   }
-  const layout = memberUnfolded(member, holeWidths);
+  const layout = model.unfolded;
   const index = new Map(layout.holes.map((h, i) => [h.id, i] as const));
-  const t = member.thickness;
+  const t = model.input.thickness;
   const pieces = layout.section.pieces;
   const positions = (ids: readonly string[]) => ids.map((id) => index.get(id)!);
   return {
@@ -98,17 +62,7 @@ export function memberChainTools(
       }
       return null;
     },
-    of: (ids) => {
-      const c = sectionChain(layout, positions(ids));
-      return {
-        holes: c.holes,
-        legs: c.legs.map((l) => ({ from: l.from, to: l.to, s: l.s, g: l.g, term: l.term })),
-        deducted: c.deductedArea / (pieces * t),
-        staggerSum: c.legs.reduce((s, l) => s + l.term, 0),
-        netWidth: c.netArea / (pieces * t),
-        netArea: c.netArea,
-      };
-    },
+    of: (ids) => sectionChainAsChain(sectionChain(layout, positions(ids)), t, pieces),
     rejection: (chain, d) => sectionRejection(layout, positions(chain.holes), d),
   };
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { memberShearLag } from './memberShearLag.js';
-import { memberUnfolded } from '../member/memberChainTools.js';
+import { memberModel } from '../member/memberModel.js';
 import type { CodeProfile, MemberInput } from '../types.js';
 
 const AISC: CodeProfile = { standard: 'AISC 360-22', method: 'LRFD', units: 'in' };
@@ -26,19 +26,9 @@ const angleMember = (bolts: number, pitch: number): MemberInput => ({
   })),
   shearLag: { connected: 'leg', fastenersPerLine: bolts },
 });
-const widths = (m: MemberInput, d: number) =>
-  m.holes.map((h) => ({
-    holeId: h.id,
-    nominalAcross: d,
-    nominalAlong: d,
-    allowance: 0,
-    deducted: d,
-    source: 'table' as const,
-  }));
-
 describe('memberShearLag', () => {
   it('uses a given U as is', () => {
-    expect(memberShearLag({ ...angleMember(3, 70), U: 0.8 }, AISC, 1)).toEqual({
+    expect(memberShearLag(memberModel({ ...angleMember(3, 70), U: 0.8 }, AISC), 1)).toEqual({
       U: 0.8,
       rule: 'given',
       basis: 'U = 0.8 as given',
@@ -46,39 +36,41 @@ describe('memberShearLag', () => {
   });
 
   it('AISC: the larger of Table D3.1 case 2 and case 8 (L4x4x3/8, l 9, x̄ 1.13, 4 per line: 0.874 over 0.80)', () => {
+    // 3/4 in bolts 2.5 in from the heel. The D3 floor, leg a at its full width over the elements' Ag,
+    // 4 · 0.375 / ((4 + 4 − 0.375) · 0.375) = 0.525, does not govern.
     const m: MemberInput = {
       ...angleMember(4, 3),
       section: { shape: 'angle', a: 4, b: 4, t: 0.375 },
+      holes: angleMember(4, 3).holes.map((h) => ({ ...h, gauge: 2.5, boltDiameter: 0.75 })),
       shearLag: { connected: 'leg', length: 9, xbar: 1.13, fastenersPerLine: 4 },
     };
-    const r = memberShearLag(m, AISC, 2.53)!;
+    const r = memberShearLag(memberModel(m, AISC), 2.53)!;
     expect(r.U).toBeCloseTo(1 - 1.13 / 9, 12);
     expect(r.rule).toBe('AISC 360 Table D3.1 case 2');
+    expect(r.basis).toContain("D3 floor: connected elements' gross area / Ag = 1.5/2.859 = 0.525");
   });
 
   it('EN 1993-1-8 3.10.3: three bolts at p1 = 70 mm, d0 = 22 mm give β3 = 0.5 + 0.2 (70/22 − 2.5)/2.5 as U', () => {
     const m = angleMember(3, 70);
-    const layout = memberUnfolded(m, widths(m, 22));
-    const r = memberShearLag(m, EN, 1700, layout)!;
+    const r = memberShearLag(memberModel(m, EN), 1700)!;
     expect(r.rule).toBe('EN 1993-1-8 3.10.3');
     expect(r.U).toBeCloseTo(0.5 + (0.2 * (70 / 22 - 2.5)) / 2.5, 12);
   });
 
   it('EN 1993-1-8 3.10.3, one bolt: U = 2.0 (e2 − 0.5 d0) t / Anet with e2 from the toe (100 − 55 = 45 mm)', () => {
     const m = angleMember(1, 0);
-    const layout = memberUnfolded(m, widths(m, 22));
-    const r = memberShearLag(m, EN, 1680, layout)!;
+    const r = memberShearLag(memberModel(m, EN), 1680)!;
     expect(r.U).toBeCloseTo((2 * (45 - 11) * 10) / 1680, 12);
   });
 
   it('CSA S16 12.3.3.2 (from memory, as the profile notes): angles 0.60 with fewer than 4 lines, 0.80 with 4 or more', () => {
-    expect(memberShearLag(angleMember(3, 70), CSA, 1700)!.U).toBe(0.6);
-    expect(memberShearLag(angleMember(4, 70), CSA, 1700)!.U).toBe(0.8);
+    expect(memberShearLag(memberModel(angleMember(3, 70), CSA), 1700)!.U).toBe(0.6);
+    expect(memberShearLag(memberModel(angleMember(4, 70), CSA), 1700)!.U).toBe(0.8);
   });
 
   it('says why when no rule applies (an AISC angle with 2 per line and no x̄, l), taking U = 1.0', () => {
     const m: MemberInput = { ...angleMember(2, 70), shearLag: { connected: 'leg', fastenersPerLine: 2 } };
-    const r = memberShearLag(m, { ...AISC, units: 'mm' }, 1700)!;
+    const r = memberShearLag(memberModel(m, { ...AISC, units: 'mm' }), 1700)!;
     expect(r.U).toBe(1);
     expect(r.notApplicable).toMatch(/no Table D3.1 case applies/);
   });
@@ -87,7 +79,7 @@ describe('memberShearLag', () => {
     const { section, shearLag, ...rest } = angleMember(2, 70);
     void section;
     void shearLag;
-    expect(memberShearLag({ ...rest, kind: 'plate' }, AISC, 1)).toBeUndefined();
+    expect(memberShearLag(memberModel({ ...rest, kind: 'plate' }, AISC), 1)).toBeUndefined();
   });
 });
 
@@ -120,7 +112,7 @@ describe('memberShearLag: the AISC 360-16/-22 D3 floor (published text: U of an 
   };
 
   it('raises U from case 2’s 0.57 to 0.72 and says so in the basis (before: 0.57)', () => {
-    const r = memberShearLag(w, AISC, 15, memberUnfolded(w, widths(w, 1)))!;
+    const r = memberShearLag(memberModel(w, AISC), 15)!;
     expect(r.U).toBeCloseTo(0.72, 12);
     expect(r.rule).toBe("AISC 360-22 D3 (connected elements' share of Ag)");
     expect(r.basis).toBe(
@@ -129,7 +121,7 @@ describe('memberShearLag: the AISC 360-16/-22 D3 floor (published text: U of an 
   });
 
   it('does not apply the floor under AISC 360-10, which has none (from memory)', () => {
-    const r = memberShearLag(w, { ...AISC, standard: 'AISC 360-10' }, 15, memberUnfolded(w, widths(w, 1)))!;
+    const r = memberShearLag(memberModel(w, { ...AISC, standard: 'AISC 360-10' }), 15)!;
     expect(r.U).toBeCloseTo(0.57, 12);
     expect(r.rule).toBe('AISC 360 Table D3.1 case 2');
   });
@@ -143,7 +135,7 @@ describe('memberShearLag: the AISC 360-16/-22 D3 floor (published text: U of an 
       holes: angleMember(2, 3).holes.map((h) => ({ ...h, gauge: 2.5, boltDiameter: 0.75 })),
       shearLag: { connected: 'leg', length: 3, xbar: 1.18, fastenersPerLine: 2 },
     };
-    const r = memberShearLag(m, AISC, 3, memberUnfolded(m, widths(m, 0.875)))!;
+    const r = memberShearLag(memberModel(m, AISC), 3)!;
     expect(r.U).toBeCloseTo(1 - 1.18 / 3, 12);
     expect(r.basis).toContain("D3 floor: connected elements' gross area / Ag = 2/3.75 = 0.533");
   });

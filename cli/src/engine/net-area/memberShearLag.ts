@@ -6,7 +6,7 @@ import type { SectionLayout } from '../sections/types.js';
 import { shearLagFactor } from './shear-lag/shearLagFactor.js';
 import { ShearLagError } from './shear-lag/shearLagError.js';
 import type { ShearLagShape } from './shear-lag/types.js';
-import type { CodeProfile, MemberInput, MemberShearLag } from '../types.js';
+import type { MemberInput, MemberModel, MemberShearLag } from '../types.js';
 
 const r3 = (v: number): string => String(Math.round(v * 1000) / 1000);
 
@@ -72,21 +72,16 @@ function notApplicable(why: string): MemberShearLag {
  * without either U or connection data, or with data no rule applies to, takes U = 1.0 and says why
  * (finding LG142).
  *
- * @param member - the member (U, shearLag, section, material)
- * @param profile - the file's code profile
+ * @param model - the member model (its input's U, shearLag, section and material; the unfolded
+ *   section gives EN angles d0, pitch and e2 and the AISC 360-16/-22 floor its connected elements)
  * @param An - the member's net area (all pieces)
- * @param layout - the unfolded section, for EN angles (d0, pitch, e2)
  * @returns the factor and its basis, or undefined for a plate with nothing to report
  * @example
  * // R6 2L6x6x5/8: x̄ 1.72, l 24 → case 2 U = 0.928
- * memberShearLag(twoL6x6Member, aisc, 13.01)?.U // → 0.92833
+ * memberShearLag(memberModel(twoL6x6Member, aisc), 13.01)?.U // → 0.92833
  */
-export function memberShearLag(
-  member: MemberInput,
-  profile: CodeProfile,
-  An: number,
-  layout?: SectionLayout,
-): MemberShearLag | undefined {
+export function memberShearLag(model: MemberModel, An: number): MemberShearLag | undefined {
+  const { input: member, profile, unfolded: layout } = model;
   if (member.U !== undefined) return { U: member.U, rule: 'given', basis: `U = ${member.U} as given` };
   const spec = member.shearLag;
   if (!spec) {

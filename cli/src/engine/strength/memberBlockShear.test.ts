@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyseMember } from '../analyseMember.js';
-import { holeWidth } from '../holes/holeWidth.js';
+import { memberModel } from '../member/memberModel.js';
 import { memberBlockShear } from './memberBlockShear.js';
 import type { CodeProfile, MemberInput } from '../types.js';
 
@@ -18,14 +18,13 @@ const plate = (xs: readonly number[]): MemberInput => ({
   ),
   blockShear: { endDistance: 1.5 },
 });
-const widths = (m: MemberInput) => m.holes.map((h) => holeWidth(h, LRFD));
 
 describe('memberBlockShear', () => {
   it('AISC 360 J4.3 two-plane tear-out of a plate by hand: Agv 4.5, Anv 3.1875, Agt 2.0, Ant 1.5625 in²', () => {
     // Common practice, hand check: shear planes 2 × (3 + 1.5) = 9 in long less 1.5 holes each;
     // tension plane 4 in less one hole; Rn = min(0.6·58·3.1875, 0.6·36·4.5) + 58·1.5625 = 97.2 + 90.625.
     const m = plate([0, 3]);
-    const r = memberBlockShear(m, LRFD, widths(m), ['-x'])!;
+    const r = memberBlockShear(memberModel(m, LRFD), ['-x'])!;
     expect([r.Agv, r.Anv, r.Agt, r.Ant]).toEqual([4.5, 3.1875, 2, 1.5625]);
     expect(r.available).toBeCloseTo(0.75 * (97.2 + 90.625), 9);
     expect(r.parts[0]!.kind).toBe('two-plane');
@@ -34,10 +33,10 @@ describe('memberBlockShear', () => {
 
   it('gives the same tear-out from either end for a symmetric bolt group, reporting the direction that governs', () => {
     const m = plate([0, 3]);
-    const minus = memberBlockShear(m, LRFD, widths(m), ['-x'])!;
-    const plus = memberBlockShear(m, LRFD, widths(m), ['+x'])!;
+    const minus = memberBlockShear(memberModel(m, LRFD), ['-x'])!;
+    const plus = memberBlockShear(memberModel(m, LRFD), ['+x'])!;
     expect(plus.available).toBeCloseTo(minus.available, 12);
-    expect(memberBlockShear(m, LRFD, widths(m), ['-x', '+x'])!.direction).toBe('-x');
+    expect(memberBlockShear(memberModel(m, LRFD), ['-x', '+x'])!.direction).toBe('-x');
   });
 
   it('-x tears toward the +x end: 3 + 2 bolts, the short line at the free end (AISC 360 J4.3, by hand)', () => {
@@ -66,7 +65,7 @@ describe('memberBlockShear', () => {
         })),
       ],
     };
-    const r = memberBlockShear(m, LRFD, widths(m), ['-x'])!;
+    const r = memberBlockShear(memberModel(m, LRFD), ['-x'])!;
     const u = r.outlines.find((o) => o.kind === 'two-plane')!;
     expect(u.tensionHoles).toEqual(['a1', 'b1']);
     expect(u.Agv).toBeCloseTo((7.5 + 4.5) * 0.5, 12);
@@ -80,8 +79,8 @@ describe('memberBlockShear', () => {
   it('is undefined without block-shear input or without holes', () => {
     const { blockShear, ...bare } = plate([0, 3]);
     void blockShear;
-    expect(memberBlockShear(bare, LRFD, widths(bare), ['-x'])).toBeUndefined();
-    expect(memberBlockShear({ ...plate([]), holes: [] }, LRFD, [], ['-x'])).toBeUndefined();
+    expect(memberBlockShear(memberModel(bare, LRFD), ['-x'])).toBeUndefined();
+    expect(memberBlockShear(memberModel({ ...plate([]), holes: [] }, LRFD), ['-x'])).toBeUndefined();
   });
 
   it('enters the governing strength when it is the least of yielding, rupture and block shear', () => {

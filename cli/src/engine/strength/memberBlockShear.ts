@@ -2,14 +2,13 @@ import { blockShear, type BlockShearCode } from './block-shear/blockShear.js';
 import { BlockShearError } from './block-shear/blockShearError.js';
 import { sectionBlockLayout } from './block-shear/sectionBlockLayouts.js';
 import type { BlockShearCase, BlockShearLayout } from './block-shear/types.js';
-import type { SectionLayout } from '../sections/types.js';
 import type {
   CodeProfile,
-  HoleWidth,
   LoadDirection,
   MemberBlockOutline,
   MemberBlockShear,
   MemberInput,
+  MemberModel,
 } from '../types.js';
 
 /** Outlines kept per result, least first (for comparing a claim with the outline it describes). */
@@ -61,23 +60,19 @@ function outlineOf(c: BlockShearCase, direction: LoadDirection): MemberBlockOutl
  * {@link blockOutlines} lists every outline, each with its own tension factor (`blockShear.byOutline`,
  * else Ubs / Ut), and the least over outlines and directions governs.
  *
- * @param member - the member with its `blockShear` input
- * @param profile - the file's code profile
- * @param holeWidths - deducted widths, in hole order
+ * @param model - the member model (its input's `blockShear`, the hole widths, a rolled shape's
+ *   unfolded section)
  * @param directions - directions to check
- * @param layout - the unfolded section (section members)
  * @returns the governing tear-out, or undefined without block-shear input or when no outline can form
  * @example
  * // R6 2L6x6x5/8, end distance 2.125 in: Agv 32.66, Anv 22.04, Agt 4.69, Ant 4.07 in², φRn 706 kips
- * memberBlockShear(member, aisc, widths, ['-x'], layout)?.available // → 705.8
+ * memberBlockShear(memberModel(member, aisc), ['-x'])?.available // → 705.8
  */
 export function memberBlockShear(
-  member: MemberInput,
-  profile: CodeProfile,
-  holeWidths: readonly HoleWidth[],
+  model: MemberModel,
   directions: readonly LoadDirection[],
-  layout?: SectionLayout,
 ): MemberBlockShear | undefined {
+  const { input: member, profile, holeWidths, unfolded: layout } = model;
   const spec = member.blockShear;
   if (!spec || member.holes.length === 0) return undefined;
   const elements = layout ? (spec.elements ?? [...new Set(layout.holes.map((h) => h.element))]) : ['plate'];
