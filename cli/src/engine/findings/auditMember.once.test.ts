@@ -65,7 +65,7 @@ const brace: CalcMember = {
   },
 };
 // AISC Design Examples v13.0, Example D.9 (conformance/SOURCES.md R1), claimed with a chain A–B that
-// cannot form from either end (D on its loaded side from −x, C on its line from +x).
+// cannot form from either end (its line runs on at x = 2.5 through C).
 const d9: CalcMember = {
   index: 0,
   input: d9Member,

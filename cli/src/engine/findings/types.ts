@@ -3,7 +3,7 @@
  * findings it raises and how it is set up. Nothing here depends on how a calc file is written; the
  * calc loader (cli/src/calc) reads a file into these shapes.
  */
-import type { CodeProfile, LoadDirection, MemberInput, MemberResult } from '../types.js';
+import type { CodeProfile, LoadDirection, MemberInput, MemberResult, UnitSystem } from '../types.js';
 
 export type Severity = 'error' | 'warning' | 'note';
 
@@ -141,4 +141,13 @@ export interface CalcAudit {
   readonly engineVersion: string;
   readonly profile: CodeProfile;
   readonly members: readonly MemberAudit[];
+}
+
+/** Where and how the parts of a member's audit place and word their findings. */
+export interface AuditScope {
+  readonly memberId: string;
+  /** The member's JSON pointer (`/members/{index}`); every finding's pointer starts with it. */
+  readonly pointer: string;
+  readonly units: UnitSystem;
+  readonly tolerance: Tolerance;
 }
