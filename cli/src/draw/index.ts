@@ -1,5 +1,4 @@
 export { buildDrawing } from './model.js';
-export type { DrawOptions } from './model.js';
 export { toSvg, slotPath, arrowHead } from './svg.js';
 export { lengthLabel, netWidthLabel } from './labels.js';
 export { STROKES } from './types.js';
