@@ -1,15 +1,8 @@
+import { segmentDistance } from '../engine/geometry/segmentDistance.js';
 import type { MemberInput, MemberResult } from '../engine/types.js';
 import { TEXT, type SheetFrame } from './sheet.js';
 import { sheetText } from './sheetText.js';
 import type { FractureShape, Point, TextShape } from './types.js';
-
-function distanceToSegment(p: Point, a: Point, b: Point): number {
-  const dx = b[0] - a[0];
-  const dy = b[1] - a[1];
-  const len2 = dx * dx + dy * dy;
-  const t = len2 === 0 ? 0 : Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / len2));
-  return Math.hypot(p[0] - (a[0] + t * dx), p[1] - (a[1] + t * dy));
-}
 
 /**
  * Each hole's id at the corner of the hole farthest from the fracture lines, so no line crosses it
@@ -49,7 +42,7 @@ export function holeIdLabels(
     const clearance = (c: (typeof corners)[number]): number => {
       // Judge the middle of the label, not its anchor.
       const mid: Point = [c.at[0] + (c.anchor === 'start' ? 1 : -1) * h.id.length * 0.6, c.at[1] - 0.8];
-      return Math.min(Infinity, ...fractureSegments.map(([a, b]) => distanceToSegment(mid, a, b)));
+      return Math.min(Infinity, ...fractureSegments.map(([a, b]) => segmentDistance(a, b, mid, mid)));
     };
     const best = corners.reduce((a, b) => (clearance(b) > clearance(a) + 0.5 ? b : a));
     return sheetText(best.at, h.id, TEXT.id, 'hole-id', { anchor: best.anchor });

@@ -8,8 +8,9 @@
  */
 import type { CodeProfile, LoadDirection, UnitSystem } from '../engine/types.js';
 
-/** A point on the sheet, paper mm. */
-export type Point = readonly [x: number, y: number];
+// Points on the sheet (paper mm) are the package's one point type.
+export type { Point } from '../engine/geometry/point.js';
+import type { Point } from '../engine/geometry/point.js';
 
 export interface Segment {
   readonly from: Point;

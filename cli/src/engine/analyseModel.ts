@@ -8,7 +8,7 @@ import type { AnalyseOptions, MemberModel, MemberResult, Strength } from './type
  * Net section and tensile strength of a built member for each load direction (cli/docs/method.md
  * §3–5, AISC 360 D2, D3, J4.1), step by step: the net section per direction ({@link netSections}:
  * Ag; the least chain that can form under the full load, its k least companions and, on plates, the
- * equal-share check; An = min over directions of min(governing net area, Ag)); the effective net area
+ * equal-share rule; An = min over directions of min(governing net area, Ag)); the effective net area
  * ({@link effectiveNetArea}: Ae = An·U, U from the connection or 1.0, capped at 0.85 Ag for AISC
  * bolted splice plates); tensile yielding and rupture ({@link tensileStrengths}: AISC 360 D2, or the
  * EN 1993-1-1 / CSA S16 profile); and, with block-shear input, the governing tear-out

@@ -11,7 +11,7 @@ describe('engine index', () => {
       'enumerateChains',
       'rankChains',
       'chainRejection',
-      'shareCheck',
+      'equalShareChain',
       'analyseMember',
       'inspectLayout',
       'auditMember',

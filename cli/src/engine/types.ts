@@ -212,8 +212,8 @@ export interface RankedChain extends Chain {
   readonly rejections: readonly ChainRejection[];
 }
 
-/** Equal-share check (cli/docs/method.md §4): each fastener takes an equal share of the load. */
-export interface ShareCheck {
+/** The equal-share rule's chain (cli/docs/method.md §4): each fastener takes an equal share of the load. */
+export interface EqualShareChain {
   readonly direction: LoadDirection;
   /** Chain with the least An / share over all chains. */
   readonly chain: Chain;
@@ -235,7 +235,7 @@ export interface DirectionResult {
   readonly leastChains: readonly Chain[];
   /** min(governing net area, Ag). */
   readonly An: number;
-  readonly share: ShareCheck | null;
+  readonly share: EqualShareChain | null;
 }
 
 /** Tensile yielding, tensile rupture, or block shear (AISC 360 J4.3, EN 1993-1-8 3.10.2, CSA S16 13.11). */

@@ -1,5 +1,5 @@
 import { buildChain } from './buildChain.js';
-import { checkLayout } from './checkLayout.js';
+import { assertLayout } from './assertLayout.js';
 import { EngineError } from '../engineError.js';
 import { directionSign, fractureResiduals } from './fractureResiduals.js';
 import { gaugeLines } from './gaugeLines.js';
@@ -29,7 +29,7 @@ export interface EnumerateOptions {
  * enumerateChains(d9)[0]?.netWidth    // → 11.5417
  */
 export function enumerateChains(layout: HoleLayout, options: EnumerateOptions = {}): Chain[] {
-  checkLayout(layout, 'enumerateChains');
+  assertLayout(layout, 'enumerateChains');
   const limit = options.limit ?? 2_000_000;
   const direction = options.direction ?? null;
   const lines = gaugeLines(layout);

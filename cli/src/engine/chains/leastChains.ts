@@ -1,5 +1,5 @@
 import { buildChain } from './buildChain.js';
-import { checkLayout } from './checkLayout.js';
+import { assertLayout } from './assertLayout.js';
 import { EngineError } from '../engineError.js';
 import { directionSign } from './fractureResiduals.js';
 import { gaugeLines } from './gaugeLines.js';
@@ -45,7 +45,7 @@ export function leastChains(layout: HoleLayout, direction: LoadDirection | null,
   if (!Number.isInteger(k) || k < 1) {
     throw new EngineError('invalid-argument', `leastChains: k must be a positive integer, got ${k}`);
   }
-  checkLayout(layout, 'leastChains');
+  assertLayout(layout, 'leastChains');
   const n = layout.holes.length;
   if (n === 0) return [];
   const lines = gaugeLines(layout);

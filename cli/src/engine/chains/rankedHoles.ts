@@ -18,7 +18,7 @@ export interface RankedHoles {
 
 /**
  * Lays out the holes of a layout in the rank order of its gauge lines, mirrored in x by `sign`.
- * Shared by {@link leastChains} and {@link shareCheck}, which walk the same ranks.
+ * Shared by {@link leastChains} and {@link equalShareChain}, which walk the same ranks.
  *
  * @param layout - the holes
  * @param lines - the layout's gauge lines (`gaugeLines(layout)`)

@@ -19,7 +19,7 @@ import type { AuditOptions, AuditScope, CalcMember, MemberAudit } from './types.
  * (cli/docs/method.md §8, codes in FINDING_CATALOGUE): overstated claims (LG101–LG105, errors),
  * understated ones (LG111–LG115, notes), claimed chains that do not exist (LG123) or cannot form
  * (LG122), claimed net widths that differ (LG124), a governing chain missing from the claimed chains
- * (LG121) or a controlling chain that is not the governing one (LG125), the equal-share check
+ * (LG121) or a controlling chain that is not the governing one (LG125), the equal-share rule
  * (LG131), block shear below the tensile strengths unclaimed (LG132), a tabulated Ag or a shear lag
  * factor the file should have said otherwise (LG141, LG142), detailing (LG201–LG206) and layout input
  * problems (LG301–LG303). The member is built once ({@link memberModel}) and every part takes it.

@@ -1,7 +1,8 @@
 import { formatDirection } from './formatDirection.js';
 import { formatQuantity } from './formatQuantity.js';
 import { makeFinding } from './makeFinding.js';
-import { segmentDistance, type Point } from '../geometry/segmentDistance.js';
+import type { Point } from '../geometry/point.js';
+import { segmentDistance } from '../geometry/segmentDistance.js';
 import { sectionLineDistances } from '../sections/sectionLineDistances.js';
 import type { MemberInput, MemberModel, MemberResult } from '../types.js';
 import type { Finding } from './types.js';
@@ -20,21 +21,17 @@ function plateLineDistances(
   const chainHoles = chain.map((id) => byId.get(id)!);
   const first = chainHoles[0]!;
   const last = chainHoles[chainHoles.length - 1]!;
-  const points: Point[] = [
-    { x: first.x, y: 0 },
-    ...chainHoles.map((h) => ({ x: h.x, y: h.y })),
-    { x: last.x, y: member.width },
-  ];
+  const points: Point[] = [[first.x, 0], ...chainHoles.map((h): Point => [h.x, h.y]), [last.x, member.width]];
   const inChain = new Set(chain);
   return member.holes.map((hole, i) => {
     if (inChain.has(hole.id)) return Number.NaN;
     const radius = radii[i]!;
-    const centre = { x: hole.x, y: hole.y };
+    const centre: Point = [hole.x, hole.y];
     let distance = Number.POSITIVE_INFINITY;
     for (let s = 1; s < points.length; s += 1) {
       const a = points[s - 1]!;
       const b = points[s]!;
-      if (centre.y < Math.min(a.y, b.y) - radius || centre.y > Math.max(a.y, b.y) + radius) continue;
+      if (centre[1] < Math.min(a[1], b[1]) - radius || centre[1] > Math.max(a[1], b[1]) + radius) continue;
       distance = Math.min(distance, segmentDistance(a, b, centre, centre));
     }
     return distance;

@@ -12,7 +12,7 @@ export type Severity = 'error' | 'warning' | 'note';
  * or strength than the recomputation gives (unsafe). `understated`: it claims less (conservative).
  * `missed-chain`: the governing chain was not among those claimed. `phantom-chain`: a claimed chain
  * cannot form for the load direction, or does not exist. `chain-width`: a claimed chain's net width
- * differs. `equal-share`: the equal-share check falls below the full-load An. `detailing`: hole
+ * differs. `equal-share`: the equal-share rule falls below the full-load An. `detailing`: hole
  * layout, spacing and edge distance. `input`: the file itself.
  */
 export type FindingClass =

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { segmentDistance } from './segmentDistance.js';
 
-const p = (x: number, y: number) => ({ x, y });
+const p = (x: number, y: number) => [x, y] as const;
 
 describe('segmentDistance', () => {
   it('is the gap between two apart segments', () => {

@@ -1,24 +1,21 @@
-/** A point in the plate's plane. */
-export interface Point {
-  readonly x: number;
-  readonly y: number;
-}
+import type { Point } from './point.js';
 
 function pointToSegment(p: Point, a: Point, b: Point): number {
-  const dx = b.x - a.x;
-  const dy = b.y - a.y;
+  const dx = b[0] - a[0];
+  const dy = b[1] - a[1];
   const length2 = dx * dx + dy * dy;
-  const t = length2 === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - a.x) * dx + (p.y - a.y) * dy) / length2));
-  return Math.hypot(p.x - (a.x + t * dx), p.y - (a.y + t * dy));
+  const t = length2 === 0 ? 0 : Math.max(0, Math.min(1, ((p[0] - a[0]) * dx + (p[1] - a[1]) * dy) / length2));
+  return Math.hypot(p[0] - (a[0] + t * dx), p[1] - (a[1] + t * dy));
 }
 
 function cross(o: Point, a: Point, b: Point): number {
-  return (a.x - o.x) * (b.y - o.y) - (a.y - o.y) * (b.x - o.x);
+  return (a[0] - o[0]) * (b[1] - o[1]) - (a[1] - o[1]) * (b[0] - o[0]);
 }
 
 /**
  * Least distance between two segments ab and cd (0 when they cross); a segment may be a point.
- * Plane geometry, used for hole outlines (a slot is a segment swept by a circle) and fracture lines.
+ * Plane geometry, used for hole outlines (a slot is a segment swept by a circle), fracture lines and
+ * the drawing's label placement.
  *
  * @param a - first segment's start
  * @param b - first segment's end
@@ -26,8 +23,8 @@ function cross(o: Point, a: Point, b: Point): number {
  * @param d - second segment's end
  * @returns the distance
  * @example
- * segmentDistance({ x: 0, y: 0 }, { x: 2, y: 0 }, { x: 1, y: 3 }, { x: 1, y: 1 }) // → 1
- * segmentDistance({ x: 0, y: 0 }, { x: 2, y: 2 }, { x: 0, y: 2 }, { x: 2, y: 0 }) // → 0 (they cross)
+ * segmentDistance([0, 0], [2, 0], [1, 3], [1, 1]) // → 1
+ * segmentDistance([0, 0], [2, 2], [0, 2], [2, 0]) // → 0 (they cross)
  */
 export function segmentDistance(a: Point, b: Point, c: Point, d: Point): number {
   const d1 = cross(a, b, c);

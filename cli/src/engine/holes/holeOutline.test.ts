@@ -4,21 +4,21 @@ import { holeOutline } from './holeOutline.js';
 describe('holeOutline', () => {
   it('is a circle (a point swept) for a round hole', () => {
     expect(holeOutline(1, 2, 0.8125, 0.8125)).toEqual({
-      a: { x: 1, y: 2 },
-      b: { x: 1, y: 2 },
+      a: [1, 2],
+      b: [1, 2],
       radius: 0.40625,
     });
   });
 
   it('runs along x for a slot long along the load, along y for one long across', () => {
     expect(holeOutline(0, 5, 0.8125, 1.875)).toEqual({
-      a: { x: -0.53125, y: 5 },
-      b: { x: 0.53125, y: 5 },
+      a: [-0.53125, 5],
+      b: [0.53125, 5],
       radius: 0.40625,
     });
     expect(holeOutline(0, 5, 1.875, 0.8125)).toEqual({
-      a: { x: 0, y: 4.46875 },
-      b: { x: 0, y: 5.53125 },
+      a: [0, 4.46875],
+      b: [0, 5.53125],
       radius: 0.40625,
     });
   });

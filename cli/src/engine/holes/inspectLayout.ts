@@ -89,7 +89,9 @@ export function inspectLayout(member: MemberInput, profile?: CodeProfile): Input
   });
 
   // Pairs sorted by the low y of their outline, so the scan stops once outlines cannot meet across.
-  const reach = outlines.map((o) => (o ? Math.max(o.a.y, o.b.y) - Math.min(o.a.y, o.b.y) + 2 * o.radius : 0));
+  const reach = outlines.map((o) =>
+    o ? Math.max(o.a[1], o.b[1]) - Math.min(o.a[1], o.b[1]) + 2 * o.radius : 0,
+  );
   const maxReach = Math.max(0, ...reach);
   const order = member.holes.map((_, i) => i).filter((i) => outlines[i]);
   order.sort((a, b) => member.holes[a]!.y - member.holes[b]!.y || a - b);

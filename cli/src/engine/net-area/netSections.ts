@@ -1,6 +1,6 @@
 import { EngineError } from '../engineError.js';
 import { leastChains } from '../chains/leastChains.js';
-import { shareCheck } from '../chains/shareCheck.js';
+import { equalShareChain } from '../chains/equalShareChain.js';
 import { sectionDirections } from '../sections/sectionDirections.js';
 import type { DirectionResult, LoadDirection, MemberGrossArea, MemberModel } from '../types.js';
 import { sectionChainAsChain } from './sectionChainAsChain.js';
@@ -21,9 +21,9 @@ export interface NetSections {
 /**
  * Net section of a member per load direction (cli/docs/method.md §3–4): the least chain that can form
  * under the full load, its k least companions and An = min(governing net area, Ag). A plate is
- * searched on its hole layout ({@link leastChains}) with the equal-share check ({@link shareCheck});
+ * searched on its hole layout ({@link leastChains}) with the equal-share rule ({@link equalShareChain});
  * a rolled shape on its unfolded section ({@link sectionDirections}), its chains given in the plate
- * shape ({@link sectionChainAsChain}), with no equal-share check.
+ * shape ({@link sectionChainAsChain}), with no equal-share rule.
  *
  * @param model - the member model
  * @param directions - the directions to report
@@ -66,7 +66,7 @@ export function netSections(
         governing,
         leastChains: least,
         An: governing ? Math.min(governing.netArea, Ag) : Ag,
-        share: shareCheck(layout, direction),
+        share: equalShareChain(layout, direction),
       };
     });
   }

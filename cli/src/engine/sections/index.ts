@@ -7,7 +7,7 @@ export { centrelinePath } from './centrelinePath.js';
 export type { CentrelinePath, CentrelinePoint } from './centrelinePath.js';
 export { chainLegPairs } from './chainLegPairs.js';
 export { channel } from './channel.js';
-export { checkSection } from './checkSection.js';
+export { assertSection } from './assertSection.js';
 export { plateSection } from './plateSection.js';
 export { positiveLength } from './positiveLength.js';
 export { SectionError } from './sectionError.js';

@@ -10,9 +10,9 @@ import type { Section } from './types.js';
  * @returns the section
  * @throws SectionError ('invalid-argument' or 'unknown-element') naming the first problem
  * @example
- * checkSection(angle(4, 3, 0.375)).elements.length // → 2
+ * assertSection(angle(4, 3, 0.375)).elements.length // → 2
  */
-export function checkSection(section: Section): Section {
+export function assertSection(section: Section): Section {
   if (section.elements.length === 0) throw new SectionError('invalid-argument', 'a section needs an element');
   if (!(Number.isInteger(section.pieces) && section.pieces >= 1)) {
     throw new SectionError('invalid-argument', `pieces must be a whole number ≥ 1, got ${section.pieces}`);

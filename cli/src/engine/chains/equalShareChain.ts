@@ -1,11 +1,11 @@
 import { buildChain } from './buildChain.js';
-import { checkLayout } from './checkLayout.js';
+import { assertLayout } from './assertLayout.js';
 import { directionSign, fractureResiduals } from './fractureResiduals.js';
 import { gaugeLines } from './gaugeLines.js';
 import { layoutTolerance } from './layoutTolerance.js';
 import { leastChains } from './leastChains.js';
 import { rankedHoles } from './rankedHoles.js';
-import type { HoleLayout, LoadDirection, ShareCheck } from '../types.js';
+import type { HoleLayout, LoadDirection, EqualShareChain } from '../types.js';
 
 /** A path from the y = 0 edge to a hole: `loaded` fasteners passed on the loaded side so far. */
 interface ShareState {
@@ -46,7 +46,7 @@ function lowerBound(sorted: Float64Array, value: number, length: number): number
 }
 
 /**
- * Equal-share check (cli/docs/method.md §4): with every fastener taking an equal share of the load, a chain
+ * Equal-share rule (cli/docs/method.md §4): with every fastener taking an equal share of the load, a chain
  * carries the share of the fasteners in it or on its far side (holes exactly on the fracture line
  * count as carried), and the chain with the least netArea / share over ALL chains is the one to
  * compare with the full-load net area. The number of fasteners left on the loaded side is a sum over
@@ -59,16 +59,16 @@ function lowerBound(sorted: Float64Array, value: number, length: number): number
  * @param layout - the holes and plate
  * @param direction - the load direction
  * @returns the least netArea / share chain, or null when the layout has no holes
- * @throws EngineError when the layout has a bad value (see checkLayout)
+ * @throws EngineError when the layout has a bad value (see assertLayout)
  * @example
  * // Plate 10 × 1, holes 1.0 wide: A (0, 3) and B (0, 7) side by side, C (3, 5) further along.
  * // From -x the straight A–B (wn 8) carries all three shares: 8 / 1 = 8.
  * // From +x A–B leaves C on the loaded side: 8 / (2/3) = 12, so C alone (wn 9, all shares) is least.
- * shareCheck(layout, '-x')?.equivalentArea // → 8   (chain A-B)
- * shareCheck(layout, '+x')?.equivalentArea // → 9   (chain C)
+ * equalShareChain(layout, '-x')?.equivalentArea // → 8   (chain A-B)
+ * equalShareChain(layout, '+x')?.equivalentArea // → 9   (chain C)
  */
-export function shareCheck(layout: HoleLayout, direction: LoadDirection): ShareCheck | null {
-  checkLayout(layout, 'shareCheck');
+export function equalShareChain(layout: HoleLayout, direction: LoadDirection): EqualShareChain | null {
+  assertLayout(layout, 'equalShareChain');
   const n = layout.holes.length;
   if (n === 0) return null;
   const lines = gaugeLines(layout);

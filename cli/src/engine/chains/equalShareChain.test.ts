@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { enumerateChains } from './enumerateChains.js';
 import { fractureSides } from './fractureSides.js';
 import { leastChains } from './leastChains.js';
-import { shareCheck } from './shareCheck.js';
+import { equalShareChain } from './equalShareChain.js';
 import type { HoleLayout, LoadDirection, PlacedHole } from '../types.js';
 
 const hole = (id: string, x: number, y: number, deducted = 1): PlacedHole => ({
@@ -40,9 +40,9 @@ function exhaustiveShare(layout: HoleLayout, direction: LoadDirection): number {
   return least;
 }
 
-describe('shareCheck', () => {
+describe('equalShareChain', () => {
   it('takes the chain carrying every share when it is least: A-B from -x, 8 / 1 = 8', () => {
-    expect(shareCheck(triangle, '-x')).toMatchObject({
+    expect(equalShareChain(triangle, '-x')).toMatchObject({
       direction: '-x',
       chain: { holes: ['A', 'B'] },
       fastenersCarried: 3,
@@ -53,7 +53,7 @@ describe('shareCheck', () => {
   });
 
   it('divides by the share carried: from +x A-B leaves C loaded, 8 / (2/3) = 12 > 9 for C alone', () => {
-    expect(shareCheck(triangle, '+x')).toMatchObject({
+    expect(equalShareChain(triangle, '+x')).toMatchObject({
       chain: { holes: ['C'] },
       fastenersCarried: 3,
       equivalentArea: 9,
@@ -63,7 +63,7 @@ describe('shareCheck', () => {
   it('a bolt added on the loaded side raises the full-load An from 8 to 9 while the old chain still gives 8 × 11/10 = 8.8', () => {
     expect(leastChains(tenBolts, '-x', 1)[0]).toMatchObject({ holes: ['A0', 'B0'], netArea: 8 });
     expect(leastChains(elevenBolts, '-x', 1)[0]).toMatchObject({ holes: ['C'], netArea: 9 });
-    const share = shareCheck(elevenBolts, '-x')!;
+    const share = equalShareChain(elevenBolts, '-x')!;
     expect(share.chain.holes).toEqual(['A0', 'B0']);
     expect(share.fastenersCarried).toBe(10);
     expect(share.equivalentArea).toBeCloseTo(8.8, 12);
@@ -80,12 +80,12 @@ describe('shareCheck', () => {
     const all = enumerateChains(row);
     const pr = all.find((c) => c.holes.join('') === 'PR')!;
     expect(fractureSides(pr, row, '-x').onLine).toEqual(['Q']);
-    expect(shareCheck(row, '-x')!.equivalentArea).toBeCloseTo(exhaustiveShare(row, '-x'), 12);
+    expect(equalShareChain(row, '-x')!.equivalentArea).toBeCloseTo(exhaustiveShare(row, '-x'), 12);
   });
 
   it('gives null without holes and the straight chain for one hole', () => {
-    expect(shareCheck({ width: 10, thickness: 1, holes: [] }, '-x')).toBeNull();
-    expect(shareCheck({ width: 10, thickness: 1, holes: [hole('A', 0, 5)] }, '+x')).toMatchObject({
+    expect(equalShareChain({ width: 10, thickness: 1, holes: [] }, '-x')).toBeNull();
+    expect(equalShareChain({ width: 10, thickness: 1, holes: [hole('A', 0, 5)] }, '+x')).toMatchObject({
       equivalentArea: 9,
       share: 1,
     });
@@ -105,7 +105,7 @@ describe('shareCheck', () => {
       }));
     fc.assert(
       fc.property(arb, fc.constantFrom<LoadDirection>('-x', '+x'), (layout, direction) => {
-        const fast = shareCheck(layout, direction)!;
+        const fast = equalShareChain(layout, direction)!;
         const expected = exhaustiveShare(layout, direction);
         expect(Math.abs(fast.equivalentArea - expected)).toBeLessThanOrEqual(1e-9 * expected);
       }),

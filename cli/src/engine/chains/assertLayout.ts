@@ -10,10 +10,10 @@ import type { HoleLayout } from '../types.js';
  * @param caller - the function name, for the message
  * @throws EngineError ('invalid-argument') naming the first bad value
  * @example
- * checkLayout({ width: 0, thickness: 0.5, holes: [] }, 'leastChains')
+ * assertLayout({ width: 0, thickness: 0.5, holes: [] }, 'leastChains')
  * // throws 'ligament/engine: leastChains: width must be a positive number, got 0'
  */
-export function checkLayout(layout: HoleLayout, caller: string): void {
+export function assertLayout(layout: HoleLayout, caller: string): void {
   const positive = (v: number): boolean => Number.isFinite(v) && v > 0;
   if (!positive(layout.width)) {
     throw new EngineError(
