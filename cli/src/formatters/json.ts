@@ -6,7 +6,7 @@
 import type { CalcError } from '../calc/types.js';
 import type { Chain, DirectionResult, Strength } from '../engine/types.js';
 import type { FileReport, LocatedFinding, MemberReport, RunReport } from '../runner/types.js';
-import { CAUTION } from '../runner/types.js';
+import { CAUTION } from '../engine/caution.js';
 
 export const RESULT_SCHEMA_ID = 'urn:ligament:schema:result:1.0';
 export const RESULT_FORMAT_VERSION = '1.0';

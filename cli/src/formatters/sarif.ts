@@ -6,7 +6,7 @@
  */
 import type { CalcError } from '../calc/types.js';
 import type { LocatedFinding, RunReport } from '../runner/types.js';
-import { CAUTION } from '../runner/types.js';
+import { CAUTION } from '../engine/caution.js';
 import type { Severity } from '../engine/findings/types.js';
 
 export const SARIF_SCHEMA_URI =

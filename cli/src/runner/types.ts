@@ -130,7 +130,3 @@ export function failingSeverities(failOn: FailOn): readonly Severity[] {
   if (failOn === 'any') return ['error', 'warning'];
   return [];
 }
-
-/** The caution every report carries. */
-export const CAUTION =
-  'Ligament is a checking aid. The engineer of record decides; the governing code and local requirements apply.';
