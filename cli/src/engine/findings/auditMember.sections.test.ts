@@ -1,34 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { auditMember } from './auditMember.js';
-import type { CodeProfile, HoleInput, MemberInput } from '../types.js';
+import { braceMember, legHole } from '../members.fixtures.js';
+import type { CodeProfile, MemberInput } from '../types.js';
 import type { CalcMember, MemberClaims } from './types.js';
 
 const AISC: CodeProfile = { standard: 'AISC 360-22', method: 'LRFD', units: 'in' };
 const EN: CodeProfile = { standard: 'EN 1993-1-1', method: 'LRFD', units: 'mm' };
 const CSA: CodeProfile = { standard: 'CSA S16-19', method: 'LRFD', units: 'mm' };
 
-const legHole = (id: string, x: number, gauge = 2.5): HoleInput => ({
-  id,
-  x,
-  y: Number.NaN,
-  element: 'leg-a',
-  gauge,
-  boltDiameter: 0.75,
-  type: 'standard',
-});
 // L4x4x3/8 brace, four 3/4 in bolts at 3 in (the Harbour Lantern example lantern-brace-angle.json).
-const brace: MemberInput = {
-  id: 'B',
-  kind: 'angle',
-  width: 7.625,
-  thickness: 0.375,
-  material: { Fy: 36, Fu: 58 },
-  directions: ['-x'],
-  section: { shape: 'angle', a: 4, b: 4, t: 0.375, tabulatedAg: 2.86 },
-  holes: [legHole('A1', 0), legHole('A2', 3), legHole('A3', 6), legHole('A4', 9)],
-  shearLag: { connected: 'leg', length: 9, xbar: 1.13, fastenersPerLine: 4 },
-  blockShear: { endDistance: 1.5 },
-};
+const brace = braceMember;
 const audit = (input: MemberInput, profile: CodeProfile, claims?: MemberClaims) =>
   auditMember({ index: 0, input, ...(claims ? { claims } : {}) } as CalcMember, profile);
 const codes = (a: ReturnType<typeof audit>) => a.findings.map((f) => f.code);
