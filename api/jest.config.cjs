@@ -1,7 +1,8 @@
 // Jest runs the ESM NestJS app in CommonJS mode: @swc/jest turns our TypeScript and the ESM-only
 // packages in node_modules (NestJS 12 and its file-type chain) into CJS. `ligament` (the workspace
-// engine + loader) is mapped to its TypeScript sources in cli/src, so tests need no cli build and always
-// exercise the current engine; the `.js` suffixes of relative ESM imports are stripped for resolution.
+// engine + loader) resolves through its package exports with the `ligament-source` condition, which
+// names its TypeScript sources (cli/src), so tests need no cli build and always exercise the current
+// engine; the `.js` suffixes of relative ESM imports are stripped for resolution.
 const esmPkgs = [
   '@nestjs',
   'file-type',
@@ -24,13 +25,11 @@ const swc = [
 ];
 module.exports = {
   testEnvironment: 'node',
+  // jest-environment-node's own conditions are node and node-addons.
+  testEnvironmentOptions: { customExportConditions: ['ligament-source', 'node', 'node-addons'] },
   rootDir: __dirname,
   testMatch: ['<rootDir>/src/**/*.spec.ts', '<rootDir>/test/**/*.e2e-spec.ts'],
-  moduleNameMapper: {
-    '^ligament$': '<rootDir>/../cli/src/index.ts',
-    '^ligament/(engine|calc|draw)$': '<rootDir>/../cli/src/$1/index.ts',
-    '^(\\.{1,2}/.*)\\.js$': '$1',
-  },
+  moduleNameMapper: { '^(\\.{1,2}/.*)\\.js$': '$1' },
   transformIgnorePatterns: [`/node_modules/(?!(${esmPkgs.join('|')})/)`],
   transform: { '^.+\\.(t|j)s$': swc },
   testTimeout: 30000,

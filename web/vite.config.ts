@@ -1,18 +1,17 @@
 import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
+import { defaultClientConditions } from 'vite';
 import { defineConfig } from 'vitest/config';
 import { calcValidatorPlugin } from './vite/calc-validator-plugin.ts';
 
 const here = (relative: string) => fileURLToPath(new URL(relative, import.meta.url));
 
-// The web app imports the engine, the calc loader and the drawing model straight from the
-// `ligament` workspace's TypeScript sources (cli/src), so dev, tests and the production build
-// never depend on the CLI package having been built first, and there is only one copy of the code.
-const ligamentSources = {
-  'ligament/engine': here('../cli/src/engine/index.ts'),
-  'ligament/calc': here('../cli/src/calc/index.ts'),
-  'ligament/draw': here('../cli/src/draw/index.ts'),
-};
+// The web app imports the engine, the calc loader and the drawing model through the `ligament`
+// package's exports like every other consumer. The package's `ligament-source` condition points each
+// entry at its TypeScript sources (cli/src), so dev, the tests (jsdom, resolved as a browser) and the
+// production build never wait for the CLI package to be built; Node, without the condition, takes
+// the built `default`.
+const ligamentSource = 'ligament-source';
 
 // Vite reads its own settings here (the app's settings go through src/config/env.ts).
 const apiTarget = 'http://127.0.0.1:3000';
@@ -28,7 +27,8 @@ export default defineConfig({
     }),
   ],
   resolve: {
-    alias: { ...ligamentSources, '@': here('./src') },
+    alias: { '@': here('./src') },
+    conditions: [ligamentSource, ...defaultClientConditions],
   },
   server: {
     proxy: { '/api': { target: apiTarget, changeOrigin: false } },

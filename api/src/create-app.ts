@@ -4,10 +4,10 @@ import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
 import helmet from 'helmet';
+import { CAUTION } from 'ligament';
 import { AppModule } from './app.module.js';
 import { HttpErrorFilter } from './common/http-error.filter.js';
 import { createValidationPipe } from './common/validation.js';
-import { CAUTION } from './reports/review-report.service.js';
 
 export interface CreateAppOptions {
   readonly logger?: LogLevel[] | false;

@@ -1,5 +1,6 @@
 import { Logger } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
+import { CAUTION } from 'ligament';
 import { appConfig, authConfig, DEMO_JWT_SECRET, environmentProblem } from './config/index.js';
 
 const problem = environmentProblem();
@@ -84,9 +85,5 @@ if (config.demo) {
   for (const u of SeedService.DEMO_USERS)
     lines.push(`    ${u.role.padEnd(11)} ${u.email.padEnd(42)} ${SeedService.DEMO_PASSWORD}`);
 }
-lines.push(
-  '',
-  'Ligament is a checking aid. The engineer of record decides; the governing code and local requirements apply.',
-  '',
-);
+lines.push('', CAUTION, '');
 process.stdout.write(`${lines.join('\n')}\n`);

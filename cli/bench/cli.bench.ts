@@ -156,11 +156,11 @@ try {
     [
       `const { runCheck } = await import(${JSON.stringify(join(root, 'dist', 'runner', 'check.js'))});`,
       `const { readSources } = await import(${JSON.stringify(join(root, 'dist', 'node', 'sources.js'))});`,
-      `const { DEFAULT_TOLERANCE } = await import(${JSON.stringify(join(root, 'dist', 'runner', 'tolerance.js'))});`,
+      `const { DEFAULT_COMMAND_LINE_TOLERANCE } = await import(${JSON.stringify(join(root, 'dist', 'runner', 'tolerance.js'))});`,
       'const held = [];',
       'for (const dir of process.argv.slice(2)) {',
       '  globalThis.gc(); const before = process.memoryUsage().heapUsed;',
-      "  held.push(await runCheck(readSources([dir], { cwd: dir, readStdin: async () => '' }), { command: 'check', settings: { tolerance: DEFAULT_TOLERANCE, failOn: 'none', k: 10 }, version: '0', keepDetail: false }));",
+      "  held.push(await runCheck(readSources([dir], { cwd: dir, readStdin: async () => '' }), { command: 'check', settings: { tolerance: DEFAULT_COMMAND_LINE_TOLERANCE, failOn: 'none', k: 10 }, version: '0', keepDetail: false }));",
       '  globalThis.gc(); console.log((process.memoryUsage().heapUsed - before) / 1048576);',
       '}',
     ].join('\n'),

@@ -7,7 +7,7 @@
  * Targets: a 500-hole member (both directions, 10 least chains, equal-share check) in ≤ 50 ms; at 8
  * gauge lines the fast search ≥ 1000× faster than listing every chain.
  */
-import { analyseMember, enumerateChains, leastChains, shareCheck } from '../src/engine/index.js';
+import { analyseMember, enumerateChains, leastChains, equalShareChain } from '../src/engine/index.js';
 import type { CodeProfile, HoleLayout, MemberInput } from '../src/engine/index.js';
 
 const PROFILE: CodeProfile = { standard: 'AISC 360-22', method: 'LRFD', units: 'in' };
@@ -99,7 +99,7 @@ const big = staggered(20, 25);
 const bigLayout = layoutOf(big);
 const member500 = median(21, () => analyseMember(big, PROFILE, { k: 10 }));
 const least500 = median(21, () => [leastChains(bigLayout, '-x', 10), leastChains(bigLayout, '+x', 10)]);
-const share500 = median(21, () => [shareCheck(bigLayout, '-x'), shareCheck(bigLayout, '+x')]);
+const share500 = median(21, () => [equalShareChain(bigLayout, '-x'), equalShareChain(bigLayout, '+x')]);
 
 /** 500 holes on 20 gauge lines at random x (a fixed seed): no regular stagger for the bound to exploit. */
 let seed = 7;
@@ -128,7 +128,7 @@ if (process.argv.includes('--json')) {
           holes: big.holes.length,
           analyseMemberMs: member500.ms,
           leastChainsBothDirectionsMs: least500.ms,
-          shareCheckBothDirectionsMs: share500.ms,
+          equalShareChainBothDirectionsMs: share500.ms,
           An: member500.result.An,
         },
         scattered500: { holes: scattered.holes.length, analyseMemberMs: scattered500.ms },
@@ -148,9 +148,9 @@ if (process.argv.includes('--json')) {
     );
   }
   console.log(`\n500 holes (20 gauge lines × 25 rows), both directions, k = 10:`);
-  console.log(`  analyseMember (chains + equal-share check): ${member500.ms.toFixed(1)} ms`);
+  console.log(`  analyseMember (chains + equal-share chain):  ${member500.ms.toFixed(1)} ms`);
   console.log(`  leastChains alone, both directions:         ${least500.ms.toFixed(1)} ms`);
-  console.log(`  shareCheck alone, both directions:          ${share500.ms.toFixed(1)} ms`);
+  console.log(`  equalShareChain alone, both directions:     ${share500.ms.toFixed(1)} ms`);
   console.log(`  the same 500 holes at random x (informative): ${scattered500.ms.toFixed(1)} ms`);
   console.log(`\nRatio exhaustive / fast at 8 gauge lines: ${Math.round(at8.ratio)}×`);
   console.log(

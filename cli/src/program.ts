@@ -4,6 +4,7 @@
  * Node itself.
  */
 import { Command, CommanderError } from './commands/commander.js';
+import { CAUTION } from './engine/caution.js';
 import { EXIT_CODES_HELP, UsageError, type CliContext } from './commands/context.js';
 import { bundledSchemaVersion } from './node/paths.js';
 import type { ExitCode } from './runner/types.js';
@@ -87,7 +88,7 @@ export async function buildProgram(ctx: CliContext, args: readonly string[] = []
   const program = new Command('ligament')
     .description(
       'Validate and recompute ligament-calc files: net section of bolted steel plates with staggered holes.\n' +
-        'Ligament is a checking aid. The engineer of record decides; the governing code and local requirements apply.',
+        CAUTION,
     )
     .option('-V, --version', 'print the package and schema versions')
     .helpOption('-h, --help', 'show help')

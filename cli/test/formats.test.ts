@@ -157,7 +157,7 @@ describe('--format markdown', () => {
 });
 
 describe('EN 1993-1-8 3.10.3(2) in the reports', () => {
-  // Hand-constructed (see src/engine/en1993UnequalAngle.test.ts for the arithmetic): L120×80×12, S235,
+  // Hand-constructed (see src/engine/analyseMember.en1993.test.ts for the arithmetic): L120×80×12, S235,
   // three M20 bolts at 70 mm through the 80 mm leg. Anet 1992 mm²; the equivalent L80×80×12 gives
   // 1992 − (120 − 80)·12 = 1512 mm²; β3 = 0.5 + 0.2·(70/22 − 2.5)/2.5 = 0.5545; Ae = 838.5 mm².
   const doc = {

@@ -12,6 +12,14 @@
  * - the loader recognises sub-schemas by identity (its hints for lengths, bolts, ids); the
  *   standalone code would carry copies, so each copied sub-schema is replaced by a reference into
  *   the loader's own CALC_SCHEMA object.
+ *
+ * The app itself reaches the loader only through the `ligament` package's exports (vite.config.ts).
+ * This plugin alone is handed files of the CLI workspace by path, because what it needs is not (and
+ * should not be) part of the package's interface: cli/package.json, to require ajv from the CLI's own
+ * dependencies (the web workspace resolves another ajv major); the schema JSON, compiled here in Node
+ * at build time; cli/src/calc/validateSchema.ts, the one internal module it patches, recognised by its
+ * file id; and cli/src/calc/schema.ts, imported by the generated code directly rather than through
+ * `ligament/calc`, whose index imports validateSchema.ts and would close an import cycle.
  */
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';

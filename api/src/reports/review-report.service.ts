@@ -1,14 +1,11 @@
 import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { codeLabel, formatQuantity, quantityText, type Dimension } from 'ligament';
+import { CAUTION, codeLabel, formatQuantity, quantityText, type Dimension } from 'ligament';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { Project } from '../projects/models/project.model.js';
 import { MemberResult } from '../results/models/member-result.model.js';
 import { stampWords, SubmittalsService } from '../submittals/submittals.service.js';
-
-export const CAUTION =
-  'Ligament is a checking aid. The engineer of record decides; the governing code and local requirements apply.';
 
 function esc(value: unknown): string {
   return String(value ?? '').replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);

@@ -1,16 +1,7 @@
-import type { Finding, FindingClass, Severity } from 'ligament';
+import { FINDING_CLASSES, SEVERITIES, type Finding, type FindingClass, type Severity } from 'ligament';
 
-export const FINDING_CLASSES: readonly FindingClass[] = [
-  'overstated',
-  'understated',
-  'missed-chain',
-  'phantom-chain',
-  'chain-width',
-  'equal-share',
-  'detailing',
-  'input',
-];
-export const SEVERITIES: readonly Severity[] = ['error', 'warning', 'note'];
+// The engine's reading order of the classes and its severities, worst first, for the DTOs and the dashboard.
+export { FINDING_CLASSES, SEVERITIES };
 
 export interface WorstFinding {
   code: string;

@@ -9,6 +9,7 @@ import {
 } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import { CAUTION } from 'ligament';
 import { Op, type Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import type { AuthUser } from '../auth/auth-user.js';
@@ -192,7 +193,7 @@ export class SubmittalsService {
             summary.worst ? `Worst: ${summary.worst.code} ${summary.worst.message}` : 'No findings.',
             url,
             '',
-            'Ligament is a checking aid. The engineer of record decides; the governing code and local requirements apply.',
+            CAUTION,
           ].join('\n'),
         })),
         transaction,
@@ -318,7 +319,7 @@ export class SubmittalsService {
               : []),
             `${this.app.publicUrl}${this.webPath(id)}`,
             '',
-            'Ligament is a checking aid. The engineer of record decides; the governing code and local requirements apply.',
+            CAUTION,
           ].join('\n'),
         })),
         transaction,

@@ -8,6 +8,7 @@ import {
 } from '@nestjs/common';
 import type { ConfigType } from '@nestjs/config';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import { CAUTION } from 'ligament';
 import type { Sequelize } from 'sequelize-typescript';
 import { hashPassword } from '../auth/password.js';
 import { passwordProblem } from '../auth/password-rules.js';
@@ -90,7 +91,7 @@ export class InvitationsService {
               `Set your password here (the link works once, for ${this.auth.inviteTtlHours} hours):`,
               link,
               '',
-              'Ligament is a checking aid. The engineer of record decides; the governing code and local requirements apply.',
+              CAUTION,
             ].join('\n'),
           },
         ],

@@ -1,11 +1,8 @@
-import {
-  formatDirection,
-  formatQuantity,
-  leastChains,
-  memberHoleWidth,
-  memberLayout,
-  memberSectionLayout,
-} from '../engine/index.js';
+import { leastChains } from '../engine/chains/leastChains.js';
+import { formatDirection } from '../engine/findings/formatDirection.js';
+import { formatQuantity } from '../engine/findings/formatQuantity.js';
+import { memberModel } from '../engine/member/memberModel.js';
+import { sectionDirections } from '../engine/sections/sectionDirections.js';
 import type { CodeProfile, MemberInput } from '../engine/types.js';
 
 /** A member whose least net section is not positive, as the loader reports it. */
@@ -33,23 +30,21 @@ export interface NetAreaIssue {
 export function netAreaIssues(member: MemberInput, profile: CodeProfile): NetAreaIssue | null {
   if (member.holes.length === 0) return null;
   const u = profile.units;
-  const widths = member.holes.map((h) => memberHoleWidth(h, profile));
-  if (member.section) {
-    const s = memberSectionLayout(member, widths, member.directions, 1);
-    for (const d of s.directions) {
+  const model = memberModel(member, profile);
+  if (model.unfolded) {
+    for (const d of sectionDirections(model.unfolded, member.directions, 1)) {
       const c = d.governing;
       if (!c || c.netArea > 0) continue;
       return {
         pointer: '/holes',
         rule: 'net-area-positive',
-        message: `chain ${c.holes.join('-')} loaded from ${formatDirection(d.direction)} leaves a net area of ${formatQuantity(c.netArea, 'area', u)} (Ag ${formatQuantity(s.grossArea.used, 'area', u)} − holes ${formatQuantity(c.deductedArea, 'area', u)} + s²/4g ${formatQuantity(c.staggerArea, 'area', u)}); the holes take the whole section, so it is not a tension member`,
+        message: `chain ${c.holes.join('-')} loaded from ${formatDirection(d.direction)} leaves a net area of ${formatQuantity(c.netArea, 'area', u)} (Ag ${formatQuantity(model.grossArea.used, 'area', u)} − holes ${formatQuantity(c.deductedArea, 'area', u)} + s²/4g ${formatQuantity(c.staggerArea, 'area', u)}); the holes take the whole section, so it is not a tension member`,
       };
     }
     return null;
   }
-  const layout = memberLayout(member, profile, widths);
   for (const direction of member.directions) {
-    const c = leastChains(layout, direction, 1)[0];
+    const c = leastChains(model.layout, direction, 1)[0];
     if (!c || (c.netWidth > 0 && c.netArea > 0)) continue;
     return {
       pointer: '/holes',

@@ -3,7 +3,12 @@
  * every length a number in the file's unit system, bolt sizes as diameters, hole dimensions resolved.
  * The on-disk shape is defined by schema/calc.schema.json (format `ligament-calc`).
  */
-import type { CodeProfile, LoadDirection, MemberInput, Finding, MemberResult } from '../engine/types.js';
+import type { CalcMember } from '../engine/findings/types.js';
+import type { CodeProfile } from '../engine/types.js';
+
+// The member and claim types a document is made of belong to the engine (it audits them); they are
+// named here too, for readers of the calc loader's API.
+export type { CalcMember, ClaimedChain, MemberClaims } from '../engine/findings/types.js';
 
 export interface CalcMeta {
   readonly project: string;
@@ -14,44 +19,6 @@ export interface CalcMeta {
   readonly tool?: { readonly name: string; readonly version?: string };
   readonly reference?: string;
   readonly notes?: string;
-}
-
-/** A chain the submitter says was checked. */
-export interface ClaimedChain {
-  readonly holes: readonly string[];
-  readonly netWidth?: number;
-  readonly direction?: LoadDirection;
-}
-
-/** The submitter's claimed results for a member. All optional; only what is claimed is compared. */
-export interface MemberClaims {
-  readonly chains?: readonly ClaimedChain[];
-  readonly controllingChain?: ClaimedChain;
-  readonly Ag?: number;
-  readonly An?: number;
-  readonly U?: number;
-  readonly Ae?: number;
-  /** Available (design or allowable) tensile yielding strength. */
-  readonly yielding?: number;
-  /** Available tensile rupture strength. */
-  readonly rupture?: number;
-  /** Governing available strength. */
-  readonly available?: number;
-  /** Block shear: gross and net shear areas, gross and net tension areas of the governing tear-out. */
-  readonly Agv?: number;
-  readonly Anv?: number;
-  readonly Agt?: number;
-  readonly Ant?: number;
-  /** Available block shear strength (φRn, Rn/Ω, Veff,Rd or Tr). */
-  readonly blockShear?: number;
-}
-
-export interface CalcMember {
-  /** Index in the file's `members` array; the member's JSON pointer is `/members/{index}`. */
-  readonly index: number;
-  readonly description?: string;
-  readonly input: MemberInput;
-  readonly claims?: MemberClaims;
 }
 
 export interface CalcDocument {
@@ -90,36 +57,3 @@ export type LoadResult =
       readonly locate: (pointer: string) => SourcePosition;
     }
   | { readonly ok: false; readonly file: string; readonly errors: readonly CalcError[] };
-
-/** Comparison tolerance for claims. */
-export interface Tolerance {
-  /** Relative tolerance, 0.005 = 0.5 %. */
-  readonly relative: number;
-  /** Absolute tolerances by dimension, in the calc file's units; when given they replace `relative` for that dimension. */
-  readonly absolute?: {
-    readonly length?: number;
-    readonly area?: number;
-    readonly force?: number;
-  };
-}
-
-export interface AuditOptions {
-  readonly tolerance?: Tolerance;
-  /** How many least chains to report per direction (default 10). */
-  readonly k?: number;
-  /** Only these directions (default: the member's own). */
-  readonly directions?: readonly LoadDirection[];
-}
-
-export interface MemberAudit {
-  readonly memberId: string;
-  readonly pointer: string;
-  readonly result: MemberResult;
-  readonly findings: readonly Finding[];
-}
-
-export interface CalcAudit {
-  readonly engineVersion: string;
-  readonly profile: CodeProfile;
-  readonly members: readonly MemberAudit[];
-}

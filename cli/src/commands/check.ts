@@ -1,6 +1,6 @@
 import { Command, Option } from './commander.js';
-import { DEFAULT_TOLERANCE } from '../runner/tolerance.js';
-import type { CheckSettings, FailOn, ToleranceSpec } from '../runner/types.js';
+import { DEFAULT_COMMAND_LINE_TOLERANCE } from '../runner/tolerance.js';
+import type { CheckSettings, FailOn, CommandLineTolerance } from '../runner/types.js';
 import type { LoadDirection } from '../engine/types.js';
 import { EXIT_CODES_HELP, setExitCode, type CliContext } from './context.js';
 import {
@@ -16,7 +16,7 @@ import { emitReport } from './report.js';
 interface CheckFlags {
   format: Format;
   output?: string;
-  tolerance?: ToleranceSpec;
+  tolerance?: CommandLineTolerance;
   failOn: FailOn;
   direction?: LoadDirection[];
   member?: string;
@@ -28,7 +28,7 @@ interface CheckFlags {
 /** Typed settings from the parsed flags. */
 export function checkSettings(flags: CheckFlags): CheckSettings {
   return {
-    tolerance: flags.tolerance ?? DEFAULT_TOLERANCE,
+    tolerance: flags.tolerance ?? DEFAULT_COMMAND_LINE_TOLERANCE,
     failOn: flags.failOn,
     k: flags.k,
     ...(flags.direction ? { directions: flags.direction } : {}),

@@ -5,7 +5,7 @@
 import { InvalidArgumentError, Option } from './commander.js';
 import type { LoadDirection } from '../engine/types.js';
 import { collectTolerance, ToleranceError } from '../runner/tolerance.js';
-import type { ToleranceSpec } from '../runner/types.js';
+import type { CommandLineTolerance } from '../runner/types.js';
 
 export const FORMATS = ['text', 'json', 'junit', 'sarif', 'markdown'] as const;
 export type Format = (typeof FORMATS)[number];
@@ -35,7 +35,10 @@ export function durationArg(value: string): number {
   return Math.round(ms);
 }
 
-export function toleranceArg(value: string, previous: ToleranceSpec | undefined): ToleranceSpec {
+export function toleranceArg(
+  value: string,
+  previous: CommandLineTolerance | undefined,
+): CommandLineTolerance {
   try {
     return collectTolerance(value, previous);
   } catch (err) {

@@ -1,5 +1,6 @@
 import { Command, Option } from './commander.js';
-import { CAUTION, failingSeverities, type ExitCode, type FailOn } from '../runner/types.js';
+import { CAUTION } from '../engine/caution.js';
+import { failingSeverities, type ExitCode, type FailOn } from '../runner/types.js';
 import type { CalcError } from '../calc/types.js';
 import { EXIT_CODES_HELP, setExitCode, UsageError, type CliContext } from './context.js';
 import { durationArg, parsePositiveInt } from './options.js';

@@ -1,5 +1,5 @@
 import { Command, Option } from './commander.js';
-import { DEFAULT_TOLERANCE } from '../runner/tolerance.js';
+import { DEFAULT_COMMAND_LINE_TOLERANCE } from '../runner/tolerance.js';
 import { EXIT_CODES_HELP, setExitCode, type CliContext } from './context.js';
 import { FORMATS, colorOption, type Format } from './options.js';
 import { emitReport } from './report.js';
@@ -39,7 +39,7 @@ ${EXIT_CODES_HELP}`,
       const sources = readSources(paths, { cwd: ctx.io.cwd, readStdin: ctx.io.readStdin });
       const outcome = await runCheck(sources, {
         command: 'validate',
-        settings: { tolerance: DEFAULT_TOLERANCE, failOn: 'overstated', k: 10 },
+        settings: { tolerance: DEFAULT_COMMAND_LINE_TOLERANCE, failOn: 'overstated', k: 10 },
         version: ctx.version,
       });
       await emitReport(outcome.result, flags, ctx);

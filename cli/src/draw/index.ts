@@ -1,6 +1,7 @@
+// The drawing model's public surface: a member and its result as plain shapes in paper millimetres,
+// one stroke table, and the SVG serialiser with the slot and arrow-head geometry any other renderer
+// (the web app's) draws the same shapes with.
 export { buildDrawing } from './model.js';
-export type { DrawOptions } from './model.js';
 export { toSvg, slotPath, arrowHead } from './svg.js';
-export { lengthLabel, netWidthLabel } from './labels.js';
 export { STROKES } from './types.js';
 export type * from './types.js';

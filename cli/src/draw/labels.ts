@@ -1,5 +1,5 @@
 /** How dimensions read on the sketch: inches as fractions to 1/16, millimetres as whole numbers. */
-import { formatQuantity } from '../engine/formatQuantity.js';
+import { formatQuantity } from '../engine/findings/formatQuantity.js';
 import type { UnitSystem } from '../engine/types.js';
 
 function gcd(a: number, b: number): number {

@@ -1,4 +1,4 @@
-import { memberSection } from '../engine/memberSection.js';
+import { memberSection } from '../engine/member/memberSection.js';
 import { unfoldedStrips } from '../engine/sections/unfoldedStrips.js';
 import type { MemberSectionInput, UnitSystem } from '../engine/types.js';
 import { lengthLabel } from './labels.js';

@@ -6,10 +6,11 @@
  * Shapes come in drawing order (back to front). Each names a {@link StrokeName}; {@link STROKES}
  * says how each looks, so the SVG serialiser and the web's React renderer draw the same sketch.
  */
-import type { LoadDirection, UnitSystem } from '../engine/types.js';
+import type { CodeProfile, LoadDirection, UnitSystem } from '../engine/types.js';
 
-/** A point on the sheet, paper mm. */
-export type Point = readonly [x: number, y: number];
+// Points on the sheet (paper mm) are the package's one point type.
+export type { Point } from '../engine/geometry/point.js';
+import type { Point } from '../engine/geometry/point.js';
 
 export interface Segment {
   readonly from: Point;
@@ -183,4 +184,13 @@ export interface Drawing {
   /** One-line description for accessibility (SVG <title>, aria-label). */
   readonly title: string;
   readonly shapes: readonly Shape[];
+}
+
+/** Options of buildDrawing: the units, and what the title block and the foot of the sheet say. */
+export interface DrawOptions {
+  readonly units: UnitSystem;
+  readonly profile?: CodeProfile;
+  readonly project?: string;
+  /** Line printed along the foot of the sheet. */
+  readonly caution?: string;
 }

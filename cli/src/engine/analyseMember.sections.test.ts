@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyseMember } from './analyseMember.js';
-import { leastChains } from './leastChains.js';
+import { leastChains } from './chains/leastChains.js';
 import type { CodeProfile, HoleInput, MemberInput } from './types.js';
 
 const AISC16: CodeProfile = { standard: 'AISC 360-16', method: 'LRFD', units: 'in' };

@@ -12,6 +12,7 @@
  * Coordinates: `x` runs along the load axis, `y` across the width from one longitudinal edge,
  * 0 ≤ y ≤ width.
  */
+import type { SectionGrossArea, SectionLayout } from './sections/types.js';
 
 /** Unit system of a calc file. */
 export type UnitSystem = 'in' | 'mm';
@@ -215,8 +216,8 @@ export interface RankedChain extends Chain {
   readonly rejections: readonly ChainRejection[];
 }
 
-/** Equal-share check (cli/docs/method.md §4): each fastener takes an equal share of the load. */
-export interface ShareCheck {
+/** The equal-share rule's chain (cli/docs/method.md §4): each fastener takes an equal share of the load. */
+export interface EqualShareChain {
   readonly direction: LoadDirection;
   /** Chain with the least An / share over all chains. */
   readonly chain: Chain;
@@ -238,7 +239,7 @@ export interface DirectionResult {
   readonly leastChains: readonly Chain[];
   /** min(governing net area, Ag). */
   readonly An: number;
-  readonly share: ShareCheck | null;
+  readonly share: EqualShareChain | null;
 }
 
 /** Tensile yielding, tensile rupture, or block shear (AISC 360 J4.3, EN 1993-1-8 3.10.2, CSA S16 13.11). */
@@ -365,47 +366,6 @@ export interface MemberBlockShear {
   readonly outlines: readonly MemberBlockOutline[];
 }
 
-export type Severity = 'error' | 'warning' | 'note';
-
-/**
- * Finding classes, in the order a checker reads them. `overstated`: the submission claims more area
- * or strength than the recomputation gives (unsafe). `understated`: it claims less (conservative).
- * `missed-chain`: the governing chain was not among those claimed. `phantom-chain`: a claimed chain
- * cannot form for the load direction, or does not exist. `chain-width`: a claimed chain's net width
- * differs. `equal-share`: the equal-share check falls below the full-load An. `detailing`: hole
- * layout, spacing and edge distance. `input`: the file itself.
- */
-export type FindingClass =
-  | 'overstated'
-  | 'understated'
-  | 'missed-chain'
-  | 'phantom-chain'
-  | 'chain-width'
-  | 'equal-share'
-  | 'detailing'
-  | 'input';
-
-export interface Finding {
-  /** Stable code of our own, e.g. `LG101`. */
-  readonly code: string;
-  /** Stable kebab-case name of the code, e.g. `overstated-net-area`. */
-  readonly name: string;
-  readonly class: FindingClass;
-  readonly severity: Severity;
-  readonly memberId?: string;
-  readonly direction?: LoadDirection;
-  /** Hole ids of the chain concerned, if any. */
-  readonly chain?: readonly string[];
-  /** Hole ids concerned (detailing). */
-  readonly holes?: readonly string[];
-  readonly claimed?: number;
-  readonly recomputed?: number;
-  /** One line an engineer would accept, with the numbers. */
-  readonly message: string;
-  /** JSON pointer into the calc file of the value the finding is about. */
-  readonly pointer: string;
-}
-
 /**
  * A hole placed in a member, reduced to what the chain search needs: its position, its index in the
  * member's `holes` array (for JSON pointers) and the width it deducts (see {@link HoleWidth}).
@@ -471,14 +431,31 @@ export interface InputIssue {
   readonly holes: readonly string[];
 }
 
-/** One entry of the finding catalogue: what a code means, for SARIF rules, docs and the dashboard. */
-export interface FindingRule {
-  readonly code: string;
-  readonly name: string;
-  readonly class: FindingClass;
-  /** Default severity; some codes are raised or lowered case by case (see `help`). */
-  readonly severity: Severity;
-  readonly title: string;
-  /** Two or three sentences for an engineer. */
-  readonly help: string;
+/**
+ * A member built once for an analysis or an audit (member/memberModel.ts): its input and profile, the
+ * width every hole deducts, and what the chain searches work on: a plate's hole layout, or a rolled
+ * shape's unfolded section with its gross area. The analysis, the claimed-chain tools, and the
+ * grazing and detailing findings all take this one value, so nothing is built twice.
+ */
+export type MemberModel = PlateModel | SectionModel;
+
+interface BuiltMember {
+  readonly input: MemberInput;
+  readonly profile: CodeProfile;
+  /** Width each hole deducts, in hole order (holes/memberHoleWidth.ts). */
+  readonly holeWidths: readonly HoleWidth[];
+}
+
+/** A plate (`plate`, `splice-plate`, `gusset`) as the chain searches see it. */
+export interface PlateModel extends BuiltMember {
+  readonly layout: HoleLayout;
+  readonly unfolded?: undefined;
+}
+
+/** A rolled shape unfolded into flat elements (cli/src/engine/sections/README.md). */
+export interface SectionModel extends BuiltMember {
+  readonly unfolded: SectionLayout;
+  /** Gross area from the elements and as tabulated; `used` is Ag. */
+  readonly grossArea: SectionGrossArea;
+  readonly layout?: undefined;
 }

@@ -4,11 +4,11 @@
  * its own version.
  */
 import type { CalcError } from '../calc/types.js';
-import { codeLabel } from '../engine/codeLabel.js';
-import { designMethodOf } from '../engine/designMethodOf.js';
+import { codeLabel } from '../engine/strength/codeLabel.js';
+import { designMethodOf } from '../engine/strength/designMethodOf.js';
 import type { Chain, DirectionResult, Strength } from '../engine/types.js';
 import type { FileReport, LocatedFinding, MemberReport, RunReport } from '../runner/types.js';
-import { CAUTION } from '../runner/types.js';
+import { CAUTION } from '../engine/caution.js';
 
 export const RESULT_SCHEMA_ID = 'urn:ligament:schema:result:1.0';
 export const RESULT_FORMAT_VERSION = '1.0';

@@ -3,9 +3,9 @@
  * finding at or above `--fail-on`; its failure carries the finding text. Findings below the line go
  * to the testcase's system-out. An invalid file is one testcase with an error per input error.
  */
-import type { FindingClass } from '../engine/types.js';
 import type { FileReport, LocatedFinding, MemberReport, RunReport } from '../runner/types.js';
 import { isFailing, position, xmlEscape as x } from './common.js';
+import type { FindingClass } from '../engine/findings/types.js';
 
 /** The checks each member is reported under, and the finding classes each one collects. */
 export const JUNIT_CHECKS: readonly { readonly name: string; readonly classes: readonly FindingClass[] }[] = [

@@ -3,7 +3,7 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { runCheck } from '../runner/check.js';
 import type { Source } from '../runner/source.js';
-import { DEFAULT_TOLERANCE } from '../runner/tolerance.js';
+import { DEFAULT_COMMAND_LINE_TOLERANCE } from '../runner/tolerance.js';
 import type { FailOn } from '../runner/types.js';
 import { formatMarkdown } from './markdown.js';
 
@@ -16,7 +16,7 @@ async function heading(names: readonly string[], failOn: FailOn, command: 'check
   const sources = names.map((n) => (n.startsWith('{') ? { file: 'broken.json', text: n } : example(n)));
   const { result } = await runCheck(sources, {
     command,
-    settings: { tolerance: DEFAULT_TOLERANCE, failOn, k: 10 },
+    settings: { tolerance: DEFAULT_COMMAND_LINE_TOLERANCE, failOn, k: 10 },
     version: '0.1.0',
   });
   return formatMarkdown(result).split('\n')[0];

@@ -3,7 +3,7 @@
  * at or above `--fail-on` with their locations (others folded away), and the caution.
  */
 import type { RunReport } from '../runner/types.js';
-import { CAUTION } from '../runner/types.js';
+import { CAUTION } from '../engine/caution.js';
 import { formatQuantity } from '../engine/index.js';
 import { chainLabel, fileUnits, isFailing, plural, position, strengthSymbol, totalsLine } from './common.js';
 

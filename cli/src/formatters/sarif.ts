@@ -5,9 +5,9 @@
  * scanning shows them inline.
  */
 import type { CalcError } from '../calc/types.js';
-import type { Severity } from '../engine/types.js';
 import type { LocatedFinding, RunReport } from '../runner/types.js';
-import { CAUTION } from '../runner/types.js';
+import { CAUTION } from '../engine/caution.js';
+import type { Severity } from '../engine/findings/types.js';
 
 export const SARIF_SCHEMA_URI =
   'https://docs.oasis-open.org/sarif/sarif/v2.1.0/errata01/os/schemas/sarif-schema-2.1.0.json';

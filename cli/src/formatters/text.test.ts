@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { runCheck } from '../runner/check.js';
-import { DEFAULT_TOLERANCE } from '../runner/tolerance.js';
+import { DEFAULT_COMMAND_LINE_TOLERANCE } from '../runner/tolerance.js';
 import { formatText } from './text.js';
 
 async function textOf(name: string): Promise<string[]> {
@@ -12,7 +12,7 @@ async function textOf(name: string): Promise<string[]> {
   );
   const { result } = await runCheck([{ file: name, text }], {
     command: 'check',
-    settings: { tolerance: DEFAULT_TOLERANCE, failOn: 'none', k: 10 },
+    settings: { tolerance: DEFAULT_COMMAND_LINE_TOLERANCE, failOn: 'none', k: 10 },
     version: '0.1.0',
   });
   return formatText(result).split('\n');

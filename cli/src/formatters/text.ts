@@ -4,7 +4,7 @@
  */
 import type { CalcError } from '../calc/types.js';
 import type { MemberReport, RunReport, FileReport, LocatedFinding } from '../runner/types.js';
-import { CAUTION } from '../runner/types.js';
+import { CAUTION } from '../engine/caution.js';
 import { codeLabel, formatQuantity, unitSymbol, type Dimension } from '../engine/index.js';
 import {
   chainLabel,

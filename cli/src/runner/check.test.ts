@@ -3,15 +3,16 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { checkSource, exitCodeFor, runCheck, summarise } from './check.js';
 import { sourceError, type Source } from './source.js';
-import { DEFAULT_TOLERANCE } from './tolerance.js';
-import type { CheckSettings } from './types.js';
+import { DEFAULT_COMMAND_LINE_TOLERANCE } from './tolerance.js';
+import type { Severity } from '../engine/findings/types.js';
+import type { CheckSettings, FileReport, MemberReport } from './types.js';
 
 const example = (name: string): Source => ({
   file: name,
   text: readFileSync(fileURLToPath(new URL(`../../../schema/examples/${name}`, import.meta.url)), 'utf8'),
 });
 const settings = (over: Partial<CheckSettings> = {}): CheckSettings => ({
-  tolerance: DEFAULT_TOLERANCE,
+  tolerance: DEFAULT_COMMAND_LINE_TOLERANCE,
   failOn: 'overstated',
   k: 10,
   ...over,
@@ -54,16 +55,43 @@ describe('runner/check', () => {
   });
 
   it('summarise counts findings by severity and those at or above fail-on', () => {
-    const ctx = { command: 'check' as const, settings: settings(), version: '0.1.0' };
-    const files = [checkSource(example('lantern-lap-phantom-chain.json'), ctx)];
-    const counts = summarise(files, settings());
-    const all = files[0]!.members[0]!.findings;
-    expect(counts.findings.error).toBe(all.filter((f) => f.severity === 'error').length);
-    expect(counts.failing).toBe(counts.findings.error);
-    expect(summarise(files, settings({ failOn: 'any' })).failing).toBe(
-      counts.findings.error + counts.findings.warning,
-    );
-    expect(exitCodeFor(counts)).toBe(1);
+    // Two checked files with 2 errors, 1 warning and 3 notes over three members, one invalid file with
+    // two input errors: counts written out by hand.
+    const member = (...severities: Severity[]) =>
+      ({ memberId: 'M', findings: severities.map((severity) => ({ severity })) }) as unknown as MemberReport;
+    const checked = (...members: MemberReport[]): FileReport => ({
+      file: 'a.json',
+      status: 'checked',
+      errors: [],
+      members,
+      memberCount: members.length,
+    });
+    const error = { file: 'bad.json', pointer: '', line: 1, column: 1, rule: 'json-syntax', message: 'x' };
+    const files: FileReport[] = [
+      checked(member('error', 'note'), member('warning', 'note')),
+      checked(member('error', 'note')),
+    ];
+    const invalid: FileReport = {
+      file: 'bad.json',
+      status: 'invalid',
+      errors: [error, error],
+      members: [],
+      memberCount: 0,
+    };
+    const all = [...files, invalid];
+    expect(summarise(all, settings())).toEqual({
+      files: 3,
+      invalidFiles: 1,
+      members: 3,
+      findings: { error: 2, warning: 1, note: 3 },
+      failing: 2,
+      inputErrors: 2,
+    });
+    expect(summarise(all, settings({ failOn: 'any' })).failing).toBe(3);
+    expect(summarise(all, settings({ failOn: 'none' })).failing).toBe(0);
+    expect(exitCodeFor(summarise(all, settings()))).toBe(2);
+    expect(exitCodeFor(summarise(files, settings()))).toBe(1);
+    expect(exitCodeFor(summarise([checked(member('warning', 'note'))], settings()))).toBe(0);
   });
 
   it('streams: onFile sees each report as soon as it is made', async () => {

@@ -1,7 +1,6 @@
 import { auditCalc, ENGINE_VERSION } from '../engine/index.js';
 import { loadCalcText, SCHEMA_VERSION } from '../calc/index.js';
 import type { CalcError, CalcDocument, LoadResult } from '../calc/types.js';
-import type { Severity } from '../engine/types.js';
 import type { Source } from './source.js';
 import { resolveTolerance } from './tolerance.js';
 import {
@@ -16,6 +15,7 @@ import {
   type RunSummary,
   type ToolInfo,
 } from './types.js';
+import type { Severity } from '../engine/findings/types.js';
 
 export interface RunContext {
   readonly command: 'check' | 'validate';

@@ -4,7 +4,8 @@ import { analyseMember } from '../engine/index.js';
 import { buildDrawing, toSvg, type Drawing } from '../draw/index.js';
 import { engineFailure, pickMember } from './member.js';
 import type { Source } from './source.js';
-import { CAUTION, type RunOutcome } from './types.js';
+import { CAUTION } from '../engine/caution.js';
+import type { RunOutcome } from './types.js';
 import type { LoadDirection } from '../engine/types.js';
 
 export interface DrawRunOptions {

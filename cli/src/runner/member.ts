@@ -1,7 +1,8 @@
 /** Shared by the single-file runners (chains, draw): load one source and pick one member. */
-import type { CalcDocument, CalcError, CalcMember } from '../calc/types.js';
+import type { CalcDocument, CalcError } from '../calc/types.js';
 import { loadSource } from './check.js';
 import type { Source } from './source.js';
+import type { CalcMember } from '../engine/findings/types.js';
 
 export type PickedMember =
   | { readonly ok: true; readonly file: string; readonly document: CalcDocument; readonly member: CalcMember }

@@ -1,11 +1,13 @@
-import type { Tolerance } from '../calc/types.js';
+import { DEFAULT_TOLERANCE } from '../engine/findings/withinTolerance.js';
 import type { UnitSystem } from '../engine/types.js';
-import type { AbsoluteTolerance, ToleranceDimension, ToleranceSpec } from './types.js';
+import type { AbsoluteTolerance, ToleranceDimension, CommandLineTolerance } from './types.js';
+import type { Tolerance } from '../engine/findings/types.js';
 
-/** Default relative tolerance for claimed numbers: 0.5 %. */
-export const DEFAULT_RELATIVE_TOLERANCE = 0.005;
-
-export const DEFAULT_TOLERANCE: ToleranceSpec = { relative: DEFAULT_RELATIVE_TOLERANCE, absolute: [] };
+/** `--tolerance` when none is given: the engine's DEFAULT_TOLERANCE (0.5 % relative). */
+export const DEFAULT_COMMAND_LINE_TOLERANCE: CommandLineTolerance = {
+  relative: DEFAULT_TOLERANCE.relative,
+  absolute: [],
+};
 
 const UNITS: Record<string, { dimension: ToleranceDimension; units: UnitSystem }> = {
   in: { dimension: 'length', units: 'in' },
@@ -67,8 +69,11 @@ export function parseToleranceValue(text: string): { relative: number } | { abso
 }
 
 /** Adds one `--tolerance` value to those already given (commander's collect pattern). */
-export function collectTolerance(text: string, previous: ToleranceSpec | undefined): ToleranceSpec {
-  const base = previous ?? DEFAULT_TOLERANCE;
+export function collectTolerance(
+  text: string,
+  previous: CommandLineTolerance | undefined,
+): CommandLineTolerance {
+  const base = previous ?? DEFAULT_COMMAND_LINE_TOLERANCE;
   const parsed = parseToleranceValue(text);
   if ('relative' in parsed) return { ...base, relative: parsed.relative };
   const others = base.absolute.filter((a) => a.dimension !== parsed.absolute.dimension);
@@ -79,7 +84,7 @@ export function collectTolerance(text: string, previous: ToleranceSpec | undefin
  * The engine's tolerance for a file in the given unit system: absolute values given in the other
  * system are converted (1 in = 25.4 mm, 1 kip = 4.4482 kN).
  */
-export function resolveTolerance(spec: ToleranceSpec, units: UnitSystem): Tolerance {
+export function resolveTolerance(spec: CommandLineTolerance, units: UnitSystem): Tolerance {
   if (spec.absolute.length === 0) return { relative: spec.relative };
   const absolute: { length?: number; area?: number; force?: number } = {};
   for (const a of spec.absolute) {
@@ -91,7 +96,7 @@ export function resolveTolerance(spec: ToleranceSpec, units: UnitSystem): Tolera
 }
 
 /** How a tolerance reads in a report, e.g. `0.5%, 0.02in`. */
-export function describeTolerance(spec: ToleranceSpec): string {
+export function describeTolerance(spec: CommandLineTolerance): string {
   const parts = [`${Number((spec.relative * 100).toPrecision(6))}%`];
   for (const a of spec.absolute) parts.push(a.text);
   return parts.join(', ');

@@ -4,15 +4,8 @@
  * keeps what it reports.
  */
 import type { CalcError } from '../calc/types.js';
-import type {
-  CodeProfile,
-  Finding,
-  LoadDirection,
-  MemberInput,
-  MemberResult,
-  Severity,
-  UnitSystem,
-} from '../engine/types.js';
+import type { CodeProfile, LoadDirection, MemberInput, MemberResult, UnitSystem } from '../engine/types.js';
+import type { Finding, Severity } from '../engine/findings/types.js';
 
 /** Exit codes of every command: 0 clean, 1 findings at or above `--fail-on`, 2 usage or input error. */
 export type ExitCode = 0 | 1 | 2;
@@ -91,7 +84,7 @@ export interface RunSummary {
 }
 
 /** Comparison tolerance as given on the command line, before it is resolved for a file's units. */
-export interface ToleranceSpec {
+export interface CommandLineTolerance {
   readonly relative: number;
   readonly absolute: readonly AbsoluteTolerance[];
 }
@@ -107,7 +100,7 @@ export interface AbsoluteTolerance {
 }
 
 export interface CheckSettings {
-  readonly tolerance: ToleranceSpec;
+  readonly tolerance: CommandLineTolerance;
   readonly failOn: FailOn;
   readonly k: number;
   readonly directions?: readonly LoadDirection[];
@@ -137,7 +130,3 @@ export function failingSeverities(failOn: FailOn): readonly Severity[] {
   if (failOn === 'any') return ['error', 'warning'];
   return [];
 }
-
-/** The caution every report carries. */
-export const CAUTION =
-  'Ligament is a checking aid. The engineer of record decides; the governing code and local requirements apply.';

@@ -1,17 +1,8 @@
 import { tokens } from '@fluentui/react-components';
-import type { FindingClass, Severity } from 'ligament/engine';
+import { FINDING_CLASSES, type FindingClass, type Severity } from 'ligament/engine';
 
-/** Finding classes in the order a checker reads them (the engine's own order). */
-export const FINDING_CLASSES: readonly FindingClass[] = [
-  'overstated',
-  'understated',
-  'missed-chain',
-  'phantom-chain',
-  'chain-width',
-  'equal-share',
-  'detailing',
-  'input',
-];
+/** Finding classes in the order a checker reads them: the engine's FINDING_CLASSES. */
+export { FINDING_CLASSES };
 
 export const findingClassLabels: Record<FindingClass, string> = {
   overstated: 'Overstated',

@@ -1,9 +1,8 @@
-import { SectionError } from './sectionError.js';
-import { sectionChains } from './sectionChains.js';
+import { sectionDirections } from './sectionDirections.js';
 import { sectionGrossArea } from './sectionGrossArea.js';
 import { unfold } from './unfold.js';
 import type { LoadDirection } from '../types.js';
-import type { Section, SectionDirectionResult, SectionHoleInput, SectionResult } from './types.js';
+import type { Section, SectionHoleInput, SectionResult } from './types.js';
 
 /** Options of {@link analyseSection}. */
 export interface AnalyseSectionOptions {
@@ -18,8 +17,8 @@ export interface AnalyseSectionOptions {
 /**
  * Net section of a member made of flat elements: unfolds it, finds the k least admissible chains per
  * load direction by net area, and takes An = min(least chain, Ag) per direction (cli/docs/method.md §3–4) and
- * over directions. Shear lag, strengths and block shear are separate steps (../shear-lag,
- * ../profiles, ../block-shear).
+ * over directions. Shear lag, strengths and block shear are separate steps (../net-area/shear-lag,
+ * ../profiles, ../strength/block-shear).
  *
  * @param section - the section
  * @param holes - the holes with gauges as detailers give them and their deducted widths
@@ -34,17 +33,9 @@ export function analyseSection(
   holes: readonly SectionHoleInput[],
   options: AnalyseSectionOptions = {},
 ): SectionResult {
-  const directions = options.directions ?? (['-x', '+x'] as const);
-  if (directions.length === 0 || new Set(directions).size !== directions.length) {
-    throw new SectionError('invalid-argument', 'directions must be one or both of -x, +x without repeats');
-  }
   const layout = unfold(section, holes, options);
   const grossArea = sectionGrossArea(section, options.tabulatedAg);
-  const results: SectionDirectionResult[] = directions.map((direction) => {
-    const leastChains = sectionChains(layout, direction, { k: options.k ?? 10 });
-    const governing = leastChains[0] ?? null;
-    return { direction, governing, leastChains, An: Math.min(governing?.netArea ?? layout.Ag, layout.Ag) };
-  });
+  const results = sectionDirections(layout, options.directions ?? ['-x', '+x'], options.k ?? 10);
   let best = results[0]!;
   for (const r of results) if (r.An < best.An) best = r;
   return { grossArea, layout, directions: results, An: best.An, governingDirection: best.direction };

@@ -19,7 +19,7 @@ export interface CentrelinePath {
 
 /**
  * The path along the centrelines between two points of a section. Sections are trees of elements
- * (checked by {@link checkSection}), so the path is unique: inside one element it is |u₁ − u₂|; across
+ * (checked by {@link assertSection}), so the path is unique: inside one element it is |u₁ − u₂|; across
  * junctions it runs to each junction's point on the element, then on along the next element.
  *
  * @param section - the section

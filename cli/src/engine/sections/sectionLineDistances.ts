@@ -1,4 +1,5 @@
-import { segmentDistance } from '../segmentDistance.js';
+import type { Point } from '../geometry/point.js';
+import { segmentDistance } from '../geometry/segmentDistance.js';
 import { chainLegPairs } from './chainLegPairs.js';
 import { legProjection, sectionLineAt } from './sectionLinePoint.js';
 import type { SectionLayout } from './types.js';
@@ -35,11 +36,12 @@ export function sectionLineDistances(layout: SectionLayout, chain: readonly numb
     for (const [a, b] of legs) {
       const leg = legProjection(layout, a, b, p);
       if (leg.offset >= distance) continue;
-      const start = { x: holes[a]!.x, y: 0 };
-      const meet = { x: leg.x, y: leg.along };
-      const end = { x: holes[b]!.x, y: leg.length };
-      const before = { x: h.x, y: leg.along + leg.offset };
-      const after = { x: h.x, y: leg.along - leg.offset };
+      // Points (x, distance along the leg's developed centreline from hole a).
+      const start: Point = [holes[a]!.x, 0];
+      const meet: Point = [leg.x, leg.along];
+      const end: Point = [holes[b]!.x, leg.length];
+      const before: Point = [h.x, leg.along + leg.offset];
+      const after: Point = [h.x, leg.along - leg.offset];
       distance = Math.min(
         distance,
         segmentDistance(start, meet, before, before),

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { leastChains } from '../leastChains.js';
+import { leastChains } from '../chains/leastChains.js';
 import { analyseSection } from './analyseSection.js';
 import { angle } from './angle.js';
 import { plateSection } from './plateSection.js';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { shearLagFactor } from '../shear-lag/shearLagFactor.js';
+import { shearLagFactor } from '../net-area/shear-lag/shearLagFactor.js';
 import { analyseSection } from './analyseSection.js';
 import { angle } from './angle.js';
 import { twoL6x6, twoL6x6Holes, w12x72, w12x72Holes, wt8x25, wt8x25Holes } from './sections.fixtures.js';

@@ -1,4 +1,4 @@
-import { staggerTerm } from '../staggerTerm.js';
+import { staggerTerm } from '../chains/staggerTerm.js';
 import { SectionError } from './sectionError.js';
 import type { SectionLayout } from './types.js';
 

@@ -1,5 +1,5 @@
 import { centrelinePath } from './centrelinePath.js';
-import { checkSection } from './checkSection.js';
+import { assertSection } from './assertSection.js';
 import { SectionError } from './sectionError.js';
 import { sectionGrossArea } from './sectionGrossArea.js';
 import type { Section, SectionHoleInput, SectionLayout, UnfoldedHole } from './types.js';
@@ -36,7 +36,7 @@ export function unfold(
   holes: readonly SectionHoleInput[],
   options: UnfoldOptions = {},
 ): SectionLayout {
-  checkSection(section);
+  assertSection(section);
   const byId = new Map(section.elements.map((e) => [e.id, e]));
   const seen = new Set<string>();
   let scale = 1;

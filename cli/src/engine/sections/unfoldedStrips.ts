@@ -1,4 +1,4 @@
-import { checkSection } from './checkSection.js';
+import { assertSection } from './assertSection.js';
 import type { ElementRole, Section } from './types.js';
 
 /** One element of a section as a strip of the unfolded drawing. */
@@ -31,7 +31,7 @@ export function unfoldedStrips(section: Section): {
   strips: UnfoldedStrip[];
   junctions: UnfoldedJunctionLine[];
 } {
-  checkSection(section);
+  assertSection(section);
   const byId = new Map(section.elements.map((e) => [e.id, e]));
   const strips = section.elements.map((e) => {
     const a = e.unfoldOffset;

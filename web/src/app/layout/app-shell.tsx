@@ -18,7 +18,7 @@ import { Suspense } from 'react';
 import { NavLink, Outlet, useMatches, useNavigate } from 'react-router-dom';
 import { LogoMark } from '@/components/logo-mark';
 import { LoadingState } from '@/components/states';
-import { CAUTION } from '@/config/caution';
+import { CAUTION } from 'ligament/engine';
 import { paths } from '@/config/paths';
 import { signOut } from '@/lib/auth';
 import { useServerInfo } from '@/lib/server-info';

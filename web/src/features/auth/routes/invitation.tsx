@@ -14,7 +14,7 @@ import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { LogoMark } from '@/components/logo-mark';
 import { ErrorState, LoadingState } from '@/components/states';
-import { CAUTION } from '@/config/caution';
+import { CAUTION } from 'ligament/engine';
 import { paths } from '@/config/paths';
 import { describeError } from '@/lib/api-error';
 import { acceptInvitationInputSchema, useAcceptInvitation } from '../api/accept-invitation';

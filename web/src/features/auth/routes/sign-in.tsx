@@ -2,7 +2,7 @@ import { Card, makeStyles, Text, Title1, tokens } from '@fluentui/react-componen
 import { useMutation } from '@tanstack/react-query';
 import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
 import { LogoMark } from '@/components/logo-mark';
-import { CAUTION } from '@/config/caution';
+import { CAUTION } from 'ligament/engine';
 import { paths } from '@/config/paths';
 import { signIn } from '@/lib/auth';
 import { useSession } from '@/lib/session';

@@ -11,7 +11,7 @@ import {
 } from '@fluentui/react-components';
 import { ArrowDownRegular, ArrowUpRegular, CheckmarkRegular, SubtractRegular } from '@fluentui/react-icons';
 import type { MemberClaims } from 'ligament/calc';
-import { quantityText, type Dimension, type UnitSystem } from 'ligament/engine';
+import { quantityText, withinTolerance, type Dimension, type UnitSystem } from 'ligament/engine';
 import { chainLabel } from '@/lib/units';
 
 const useStyles = makeStyles({
@@ -64,12 +64,16 @@ export interface ClaimsComparisonProps {
 
 type Verdict = 'over' | 'under' | 'same' | 'none';
 
-function verdict(claimed: number | undefined, recomputed: number, tolerance: number): Verdict {
+/** The engine's own comparison (withinTolerance), with the relative tolerance the server used. */
+function verdict(
+  claimed: number | undefined,
+  recomputed: number,
+  kind: Dimension,
+  tolerance: number,
+): Verdict {
   if (claimed === undefined) return 'none';
-  const scale = Math.max(Math.abs(recomputed), Number.EPSILON);
-  const rel = (claimed - recomputed) / scale;
-  if (Math.abs(rel) <= tolerance) return 'same';
-  return rel > 0 ? 'over' : 'under';
+  if (withinTolerance(claimed, recomputed, kind, { relative: tolerance })) return 'same';
+  return claimed > recomputed ? 'over' : 'under';
 }
 
 /** Claimed and recomputed values side by side; each difference is marked with an arrow and a word as well as colour. */
@@ -122,7 +126,7 @@ export function ClaimsComparison({ claims, recomputed, units, tolerance = 0.005 
             const claimed = claims?.[key];
             const value = recomputed[key];
             if (value === undefined) return null;
-            const v = verdict(claimed, value, tolerance);
+            const v = verdict(claimed, value, kind, tolerance);
             return (
               <TableRow key={key} className={v === 'over' ? styles.diffRow : undefined}>
                 <TableCell>

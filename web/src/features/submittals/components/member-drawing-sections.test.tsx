@@ -5,7 +5,7 @@ import { loadCalcText } from 'ligament/calc';
 import { buildDrawing, STROKES } from 'ligament/draw';
 import { analyseMember } from 'ligament/engine';
 import { describe, expect, it } from 'vitest';
-import { CAUTION } from '@/config/caution';
+import { CAUTION } from 'ligament/engine';
 import { renderWithProviders } from '@/testing/render';
 import { MemberPanel } from './member-panel';
 

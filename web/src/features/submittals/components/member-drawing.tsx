@@ -1,6 +1,6 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import type { Drawing, Point, Shape, StrokeName, TextShape } from 'ligament/draw';
-import { STROKES } from 'ligament/draw';
+import { arrowHead, slotPath, STROKES } from 'ligament/draw';
 import { chainKey } from '@/lib/units';
 
 const useStyles = makeStyles({
@@ -49,33 +49,6 @@ function strokeProps(name: StrokeName, widthFactor = 1) {
 }
 
 const pts = (points: readonly Point[]) => points.map(([x, y]) => `${x},${y}`).join(' ');
-
-function slotPath(centre: Point, along: number, across: number): string {
-  const [cx, cy] = centre;
-  if (along >= across) {
-    const r = across / 2;
-    const half = along / 2 - r;
-    return `M${cx - half},${cy - r} H${cx + half} A${r},${r} 0 0 1 ${cx + half},${cy + r} H${cx - half} A${r},${r} 0 0 1 ${cx - half},${cy - r} Z`;
-  }
-  const r = along / 2;
-  const half = across / 2 - r;
-  return `M${cx + r},${cy - half} V${cy + half} A${r},${r} 0 0 1 ${cx - r},${cy + half} V${cy - half} A${r},${r} 0 0 1 ${cx + r},${cy - half} Z`;
-}
-
-function arrowHead(tail: Point, head: Point, length: number, width: number): Point[] {
-  const dx = head[0] - tail[0];
-  const dy = head[1] - tail[1];
-  const len = Math.hypot(dx, dy) || 1;
-  const ux = dx / len;
-  const uy = dy / len;
-  const bx = head[0] - ux * length;
-  const by = head[1] - uy * length;
-  return [
-    head,
-    [bx - uy * (width / 2), by + ux * (width / 2)],
-    [bx + uy * (width / 2), by - ux * (width / 2)],
-  ];
-}
 
 function TextEl({ t, colour }: { t: TextShape; colour?: string }) {
   return (

@@ -5,7 +5,7 @@ import { codeLabel, type MemberResult } from 'ligament/engine';
 import { useMemo, useState } from 'react';
 import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
 import { EmptyState } from '@/components/states';
-import { CAUTION } from '@/config/caution';
+import { CAUTION } from 'ligament/engine';
 import type { Schema } from '@/lib/api-schemas';
 import { ChainsTable } from './chains-table';
 import { ClaimsComparison } from './claims-comparison';

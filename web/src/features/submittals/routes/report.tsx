@@ -18,7 +18,7 @@ import { useNavigate, useParams } from 'react-router-dom';
 import { SeverityBadge } from '@/components/finding-badges';
 import { LogoMark } from '@/components/logo-mark';
 import { ErrorState, LoadingState } from '@/components/states';
-import { CAUTION } from '@/config/caution';
+import { CAUTION } from 'ligament/engine';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/lib/format';
 import { chainLabel } from '@/lib/units';
