@@ -13,8 +13,42 @@ export interface paths {
     };
     get?: never;
     put?: never;
-    /** Sign in with e-mail and password (failed attempts limited per account and per client address) */
+    /** Sign in with e-mail and password (failed attempts limited per account and per client address); also sets the httpOnly refresh cookie of a new browser session */
     post: operations['AuthController_login'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/auth/session/refresh': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** A new access token for the browser session in the refresh cookie; the cookie’s token is replaced (a used one presented again ends the session) */
+    post: operations['AuthController_refresh'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/auth/session/sign-out': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Sign out: ends the browser session on the server (every tab) and clears the refresh cookie */
+    post: operations['AuthController_signOut'];
     delete?: never;
     options?: never;
     head?: never;
@@ -691,7 +725,10 @@ export interface components {
     LoginResponseDto: {
       /** @description Send as `Authorization: Bearer <accessToken>` */
       accessToken: string;
-      /** @example 8h */
+      /**
+       * @description Lifetime of the access token
+       * @example 15m
+       */
       expiresIn: string;
       user: components['schemas']['UserDto'];
     };
@@ -1388,6 +1425,76 @@ export interface operations {
       };
       /** @description Too many failed sign-ins for the account or from the address; `Retry-After` gives the seconds */
       429: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
+        };
+      };
+    };
+  };
+  AuthController_refresh: {
+    parameters: {
+      query?: never;
+      header: {
+        /** @description Must be `1`; with the Origin check, the defence against cross-site request forgery */
+        'X-Ligament-Session': string;
+      };
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['LoginResponseDto'];
+        };
+      };
+      /** @description No session, or it has ended; the cookie is cleared */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
+        };
+      };
+      /** @description Missing X-Ligament-Session header or a foreign Origin */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
+        };
+      };
+    };
+  };
+  AuthController_signOut: {
+    parameters: {
+      query?: never;
+      header: {
+        /** @description Must be `1`; with the Origin check, the defence against cross-site request forgery */
+        'X-Ligament-Session': string;
+      };
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description Signed out (also when there was no session) */
+      204: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description Missing X-Ligament-Session header or a foreign Origin */
+      403: {
         headers: {
           [name: string]: unknown;
         };
