@@ -90,6 +90,11 @@ describe('sign-in', () => {
     expect(cookie.attributes).not.toContain('Secure');
     const maxAge = Number(cookie.attributes.find((a) => a.startsWith('Max-Age='))?.slice(8));
     expect(maxAge).toBe(168 * 3600);
+    // The flag the web app reads to know a session may be restored: no secret, not httpOnly.
+    const flag = ((res.headers['set-cookie'] as unknown as string[]) ?? []).find((c) =>
+      c.startsWith('ligament_signed_in='),
+    );
+    expect(flag).toMatch(/^ligament_signed_in=1; Max-Age=604800; Path=\/; Expires=.*; SameSite=Strict$/);
   });
 
   it('stores only the sha256 of the refresh token', async () => {
@@ -227,11 +232,12 @@ describe('cross-site request forgery defence', () => {
 
   it('accepts the public address, the address the request was sent to, and a same-origin Referer', async () => {
     let { cookie } = await signIn(EMAIL.checker);
-    for (const headers of [
+    const accepted: Record<string, string>[] = [
       { 'X-Ligament-Session': '1', Origin: ORIGIN },
       { 'X-Ligament-Session': '1', Origin: base },
       { 'X-Ligament-Session': '1', Referer: `${ORIGIN}/projects/1` },
-    ]) {
+    ];
+    for (const headers of accepted) {
       const res = await refresh(cookie, headers);
       expect(res.status).toBe(200);
       cookie = sessionCookie(res)!.value;

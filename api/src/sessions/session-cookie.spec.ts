@@ -20,6 +20,13 @@ describe('session cookie', () => {
       path: '/api/auth/session',
       maxAge: 60_000,
     });
+    // Beside it, a script-readable flag with no secret in it: "this browser has a session".
+    expect(cookie).toHaveBeenCalledWith('ligament_signed_in', '1', {
+      secure: false,
+      sameSite: 'strict',
+      path: '/',
+      maxAge: 60_000,
+    });
   });
 
   it('is Secure when the request came over https or the public address is https (TLS at a proxy)', () => {
@@ -36,6 +43,11 @@ describe('session cookie', () => {
       secure: true,
       sameSite: 'strict',
       path: '/api/auth/session',
+    });
+    expect(cleared.clearCookie).toHaveBeenCalledWith('ligament_signed_in', {
+      secure: true,
+      sameSite: 'strict',
+      path: '/',
     });
   });
 

@@ -4,6 +4,11 @@ import type { Request, Response } from 'express';
 export const SESSION_COOKIE = 'ligament_session';
 export const SESSION_COOKIE_PATH = '/api/auth/session';
 /**
+ * A second cookie that says only that this browser has a session, readable by the web app, so a page
+ * opened while signed out does not ask to renew a session that is not there. It holds no secret.
+ */
+export const SIGNED_IN_COOKIE = 'ligament_signed_in';
+/**
  * The header the web app sends on the session routes. A page on another site cannot add a custom
  * header to a request here without a CORS preflight, which this service never grants.
  */
@@ -43,6 +48,12 @@ export function setSessionCookie(
     path: SESSION_COOKIE_PATH,
     maxAge: maxAgeMs,
   });
+  response.cookie(SIGNED_IN_COOKIE, '1', {
+    secure: secure(request, publicUrl),
+    sameSite: 'strict',
+    path: '/',
+    maxAge: maxAgeMs,
+  });
 }
 
 export function clearSessionCookie(request: Request, response: Response, publicUrl: string): void {
@@ -51,5 +62,10 @@ export function clearSessionCookie(request: Request, response: Response, publicU
     secure: secure(request, publicUrl),
     sameSite: 'strict',
     path: SESSION_COOKIE_PATH,
+  });
+  response.clearCookie(SIGNED_IN_COOKIE, {
+    secure: secure(request, publicUrl),
+    sameSite: 'strict',
+    path: '/',
   });
 }
