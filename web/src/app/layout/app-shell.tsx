@@ -194,8 +194,7 @@ export function AppShell() {
                   <MenuItem
                     icon={<SignOutRegular />}
                     onClick={() => {
-                      signOut();
-                      navigate(paths.signIn.getHref(), { replace: true });
+                      void signOut().finally(() => navigate(paths.signIn.getHref(), { replace: true }));
                     }}
                   >
                     Sign out
