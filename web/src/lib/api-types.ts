@@ -124,6 +124,40 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  '/api/invitations/{invitationId}/resend': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Admin: send a waiting or expired invitation again with a new link; the old link stops working (409 when accepted, revoked or already replaced) */
+    post: operations['InvitationsController_resend'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/invitations/{invitationId}/revoke': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Admin: withdraw an invitation; its link stops working (409 when accepted or already replaced) */
+    post: operations['InvitationsController_revoke'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   '/api/invitations/{token}': {
     parameters: {
       query?: never;
@@ -131,7 +165,7 @@ export interface paths {
       path?: never;
       cookie?: never;
     };
-    /** Public: what an invitation link is for (404 unknown, 410 used or expired) */
+    /** Public: what an invitation link is for (404 unknown; 410 used, revoked, replaced or expired, with details [{ state }]) */
     get: operations['InvitationsController_preview'];
     put?: never;
     post?: never;
@@ -772,10 +806,19 @@ export interface components {
       name: string;
       role: components['schemas']['Role'];
       organisationId: number | null;
+      /**
+       * @description waiting (the link works), accepted, expired, revoked by an admin, or replaced by a resent invitation
+       * @enum {string}
+       */
+      state: 'waiting' | 'accepted' | 'expired' | 'revoked' | 'replaced';
       /** Format: date-time */
       expiresAt: string;
       /** Format: date-time */
       acceptedAt: string | null;
+      /** Format: date-time */
+      revokedAt: string | null;
+      /** @description The invitation that replaced this one */
+      replacedById: number | null;
       /** Format: date-time */
       createdAt: string;
     };
@@ -1600,6 +1643,49 @@ export interface operations {
     };
     responses: {
       201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['InvitationDto'];
+        };
+      };
+    };
+  };
+  InvitationsController_resend: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        invitationId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description The new invitation that replaces it */
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['InvitationDto'];
+        };
+      };
+    };
+  };
+  InvitationsController_revoke: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        invitationId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
         headers: {
           [name: string]: unknown;
         };
