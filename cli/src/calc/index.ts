@@ -1,3 +1,5 @@
+export { diffDocuments } from './diffDocuments.js';
+export type { ChangeScope, DocumentChange } from './diffDocuments.js';
 export { loadCalcText } from './loadCalcText.js';
 export { parseLength, LengthError } from './parseLength.js';
 export type { ParseLengthOptions, LengthProblem } from './parseLength.js';
