@@ -1093,6 +1093,34 @@ export interface components {
       /** @example http://localhost:3000/submittals/12 */
       webUrl: string;
     };
+    DocumentChangeDto: {
+      /** @enum {string} */
+      scope: 'profile' | 'member' | 'hole' | 'claim';
+      /** @enum {string} */
+      change: 'added' | 'removed' | 'changed' | 'moved';
+      memberId?: string;
+      holeId?: string;
+      /**
+       * @description Path of the field in the normalised document
+       * @example claims.An
+       */
+      field?: string;
+      /**
+       * @description The field in words
+       * @example claimed An
+       */
+      label?: string;
+      /**
+       * @description Old value with its unit
+       * @example 5.75 in²
+       */
+      before?: string;
+      /**
+       * @description New value with its unit
+       * @example 5.125 in²
+       */
+      after?: string;
+    };
     FileDiffDto: {
       /** @enum {string} */
       change: 'changed' | 'unchanged' | 'added' | 'removed';
@@ -1105,6 +1133,8 @@ export interface components {
       matchedBy: 'file-name' | 'member-ids' | 'none';
       /** @description Unified diff (diff package) of the canonical JSON (sorted keys, 2 spaces); "" when unchanged */
       patch: string;
+      /** @description The same change by meaning: members, holes and claims old → new with units (every member of an added or removed file); null when a stored document could not be compared */
+      changes: components['schemas']['DocumentChangeDto'][] | null;
     };
     DiffDiscrepancyDto: {
       id: number;
