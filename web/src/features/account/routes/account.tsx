@@ -11,6 +11,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { KeyRegular } from '@fluentui/react-icons';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
@@ -32,7 +33,6 @@ const useStyles = makeStyles({
   },
   label: { color: tokens.colorNeutralForeground3 },
   mono: { fontFamily: tokens.fontFamilyMonospace },
-  wrap: { overflowX: 'auto' },
 });
 
 export function Component() {
@@ -87,7 +87,7 @@ export function Component() {
             ) : tokens_.data.length === 0 ? (
               <EmptyState title="No tokens yet" icon={<KeyRegular />} />
             ) : (
-              <div className={styles.wrap}>
+              <HorizontalScroll label="API tokens, table" minWidth="640px">
                 <Table aria-label="API tokens">
                   <TableHeader>
                     <TableRow>
@@ -127,7 +127,7 @@ export function Component() {
                     ))}
                   </TableBody>
                 </Table>
-              </div>
+              </HorizontalScroll>
             )}
           </Section>
           {projects.data?.[0] && (

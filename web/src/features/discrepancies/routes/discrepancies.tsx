@@ -50,7 +50,7 @@ const useStyles = makeStyles({
     flexWrap: 'wrap',
     marginTop: tokens.spacingVerticalM,
   },
-  pagerButtons: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
+  pagerButtons: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalS },
   picker: { maxWidth: '420px', marginBottom: tokens.spacingVerticalL },
 });
 

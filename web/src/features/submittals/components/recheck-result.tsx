@@ -13,6 +13,7 @@ import {
   Text,
   tokens,
 } from '@fluentui/react-components';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import type { Schema } from '@/lib/api-schemas';
 import { plural } from '@/lib/format';
 
@@ -21,7 +22,6 @@ type RecheckFinding = Schema<'RecheckFindingDto'>;
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
-  wrap: { overflowX: 'auto' },
   num: { textAlign: 'right', fontVariantNumeric: 'tabular-nums' },
   code: { fontFamily: tokens.fontFamilyMonospace, fontWeight: tokens.fontWeightSemibold },
   pre: {
@@ -38,7 +38,7 @@ const show = (v: number | null) => (v === null ? '—' : String(Number(v.toPreci
 function FindingTable({ label, findings }: { label: string; findings: readonly RecheckFinding[] }) {
   const styles = useStyles();
   return (
-    <div className={styles.wrap}>
+    <HorizontalScroll label={`${label}, table`} minWidth="560px">
       <Table size="small" aria-label={label}>
         <TableHeader>
           <TableRow>
@@ -61,7 +61,7 @@ function FindingTable({ label, findings }: { label: string; findings: readonly R
           ))}
         </TableBody>
       </Table>
-    </div>
+    </HorizontalScroll>
   );
 }
 
@@ -100,7 +100,7 @@ export function RecheckResult({ result }: RecheckResultProps) {
       {result.valueChanges.length > 0 && (
         <>
           <Subtitle2 as="h3">Values that changed</Subtitle2>
-          <div className={styles.wrap}>
+          <HorizontalScroll label="Values that changed, table" minWidth="480px">
             <Table size="small" aria-label="Values that changed">
               <TableHeader>
                 <TableRow>
@@ -123,7 +123,7 @@ export function RecheckResult({ result }: RecheckResultProps) {
                 ))}
               </TableBody>
             </Table>
-          </div>
+          </HorizontalScroll>
         </>
       )}
       {result.newFindings.length > 0 && (

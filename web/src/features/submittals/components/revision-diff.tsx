@@ -1,4 +1,4 @@
-import { makeStyles, Subtitle2, Text, tokens } from '@fluentui/react-components';
+import { makeStyles, Subtitle1, Subtitle2, Text, tokens } from '@fluentui/react-components';
 import { SeverityBadge } from '@/components/finding-badges';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 import type { Schema } from '@/lib/api-schemas';
@@ -7,6 +7,7 @@ import { CalcDiffView } from './calc-diff-view';
 import { MeaningDiffView } from './meaning-diff-view';
 
 const useStyles = makeStyles({
+  heading: { display: 'block', marginBottom: tokens.spacingVerticalM },
   block: {
     display: 'flex',
     flexDirection: 'column',
@@ -58,6 +59,9 @@ export function RevisionDiff({ submittalId }: RevisionDiffProps) {
   const d = diff.data;
   return (
     <div>
+      <Subtitle1 as="h2" className={styles.heading}>
+        Changes from submittal #{d.previousSubmittalId}
+      </Subtitle1>
       <div className={styles.columns}>
         <div className={styles.block}>
           <Subtitle2 as="h3">Closed ({d.closed.length})</Subtitle2>
