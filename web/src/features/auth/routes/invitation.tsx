@@ -53,7 +53,9 @@ function DeadLink({ error }: { error: unknown }) {
     <>
       <Title2 as="h1">This invitation link cannot be used</Title2>
       <Text>{error.message}</Text>
-      <Text>If you already have an account, sign in. Otherwise ask your Ligament admin for a new invitation.</Text>
+      <Text>
+        If you already have an account, sign in. Otherwise ask your Ligament admin for a new invitation.
+      </Text>
       <Button appearance="primary" onClick={() => navigate(paths.signIn.getHref(), { replace: true })}>
         Go to sign in
       </Button>
