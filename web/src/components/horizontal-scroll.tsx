@@ -104,6 +104,11 @@ export function HorizontalScroll({ label, children, buttons, className, minWidth
         aria-label={label}
         tabIndex={overflowing ? 0 : undefined}
         onScroll={measure}
+        // Keyboard focus moving along (tabs under arrow keys) brings the focused item into view.
+        onFocus={(event) => {
+          if (event.target !== event.currentTarget)
+            event.target.scrollIntoView({ block: 'nearest', inline: 'nearest' });
+        }}
       >
         {children}
       </div>

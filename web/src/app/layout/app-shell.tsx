@@ -103,7 +103,7 @@ const useStyles = makeStyles({
     display: 'none',
     color: tokens.colorNeutralForegroundOnBrand,
     ':hover': { color: tokens.colorNeutralForeground1 },
-    [NARROW]: { display: 'inline-flex' },
+    [NARROW]: { display: 'inline-flex', minWidth: 'auto' },
   },
   navLink: {
     color: tokens.colorNeutralForegroundOnBrand,
@@ -122,6 +122,8 @@ const useStyles = makeStyles({
   onBrandButton: {
     color: tokens.colorNeutralForegroundOnBrand,
     ':hover': { color: tokens.colorNeutralForeground1 },
+    // Fluent buttons are at least 96 px wide; with the name hidden the avatar needs far less.
+    [NARROW]: { minWidth: 'auto' },
   },
   user: {
     display: 'flex',
@@ -216,6 +218,7 @@ export function AppShell() {
             <NavLink
               key={item.href}
               to={item.href}
+              onClick={() => setMenuOpenAt(null)}
               className={({ isActive }) =>
                 isActive ? `${styles.navLink} ${styles.navLinkActive}` : styles.navLink
               }
