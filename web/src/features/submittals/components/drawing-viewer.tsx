@@ -43,6 +43,10 @@ const useStyles = makeStyles({
     border: `${tokens.strokeWidthThin} solid ${tokens.colorNeutralStroke2}`,
     backgroundColor: tokens.colorNeutralBackground1,
     cursor: 'grab',
+    // A drag pans the sheet; it must not select the labels' text.
+    userSelect: 'none',
+    // The drawing fills the viewport, which draws the frame.
+    '& > svg': { height: '100%', maxHeight: 'none', border: 'none', borderRadius: 0 },
     // Gestures inside the drawing pan and zoom it; the page scrolls from outside it.
     touchAction: 'none',
     ':focus-visible': {

@@ -7,8 +7,11 @@ const useStyles = makeStyles({
   svg: {
     display: 'block',
     width: '100%',
-    height: '100%',
+    height: 'auto',
+    maxHeight: '460px',
     backgroundColor: tokens.colorNeutralBackground1,
+    borderRadius: tokens.borderRadiusMedium,
+    border: `${tokens.strokeWidthThin} solid ${tokens.colorNeutralStroke2}`,
   },
 });
 
