@@ -104,10 +104,11 @@ export function HorizontalScroll({ label, children, buttons, className, minWidth
         aria-label={label}
         tabIndex={overflowing ? 0 : undefined}
         onScroll={measure}
-        // Keyboard focus moving along (tabs under arrow keys) brings the focused item into view.
+        // Keyboard focus moving along (tabs under arrow keys) brings the focused item into view
+        // (jsdom, which the unit tests run in, has no scrollIntoView).
         onFocus={(event) => {
           if (event.target !== event.currentTarget)
-            event.target.scrollIntoView({ block: 'nearest', inline: 'nearest' });
+            event.target.scrollIntoView?.({ block: 'nearest', inline: 'nearest' });
         }}
       >
         {children}
