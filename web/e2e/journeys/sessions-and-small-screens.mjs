@@ -38,6 +38,8 @@ export default async function sessionsAndSmallScreens({ runner, session, state }
 
   await runner.step('setting out: signed out, at desktop width', async () => {
     await page.setViewportSize(DESKTOP);
+    // Away from whatever the journey before left open (a detail drawer covers the header).
+    if (await accountMenu().count()) await go('/account');
     await signOutIfSignedIn();
   });
 
