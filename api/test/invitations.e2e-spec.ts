@@ -3,11 +3,9 @@
  * why, every change is an audit event, and accepting races revoking with exactly one winner.
  */
 import type { AddressInfo } from 'node:net';
-import { join } from 'node:path';
 import { Sequelize } from 'sequelize-typescript';
-import sqlite3 from 'sqlite3';
 import request from 'supertest';
-import { bearer, bootApp, EMAIL, login, type TestApp } from './helpers.js';
+import { bearer, bootApp, EMAIL, login, readDatabase, type TestApp } from './helpers.js';
 
 let t: TestApp;
 let base = '';
@@ -21,14 +19,7 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
-function sql<T>(query: string, params: (string | number)[] = []): Promise<T[]> {
-  return new Promise((resolve, reject) => {
-    const db = new sqlite3.Database(join(t.dir, 'test.sqlite'), sqlite3.OPEN_READONLY, (err) => {
-      if (err) return reject(err);
-      db.all(query, params, (e: Error | null, rows: T[]) => db.close(() => (e ? reject(e) : resolve(rows))));
-    });
-  });
-}
+const sql = <T>(query: string, params: (string | number)[] = []) => readDatabase<T>(t, query, params);
 
 interface Mail {
   subject: string;

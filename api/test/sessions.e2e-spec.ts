@@ -5,10 +5,8 @@
  */
 import { createHmac } from 'node:crypto';
 import type { AddressInfo } from 'node:net';
-import { join } from 'node:path';
-import sqlite3 from 'sqlite3';
 import request from 'supertest';
-import { bearer, bootApp, DEMO_PASSWORD, EMAIL, type TestApp } from './helpers.js';
+import { bearer, bootApp, DEMO_PASSWORD, EMAIL, readDatabase, type TestApp } from './helpers.js';
 
 const SECRET = 'test-secret-0123456789abcdef';
 /** LIGAMENT_PUBLIC_URL of the test app: the Origin the web app's pages would send. */
@@ -25,14 +23,7 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
-function sql<T>(query: string, params: (string | number)[] = []): Promise<T[]> {
-  return new Promise((resolve, reject) => {
-    const db = new sqlite3.Database(join(t.dir, 'test.sqlite'), sqlite3.OPEN_READONLY, (err) => {
-      if (err) return reject(err);
-      db.all(query, params, (e: Error | null, rows: T[]) => db.close(() => (e ? reject(e) : resolve(rows))));
-    });
-  });
-}
+const sql = <T>(query: string, params: (string | number)[] = []) => readDatabase<T>(t, query, params);
 
 interface Cookie {
   value: string;
