@@ -44,6 +44,12 @@ const useStyles = makeStyles({
   buttonEnd: { right: 0 },
 });
 
+/** The arrow buttons: one for each side that has more to show. */
+const SIDES = [
+  { side: 'before', step: -1, icon: <ChevronLeftRegular />, words: 'left' },
+  { side: 'after', step: 1, icon: <ChevronRightRegular />, words: 'right' },
+] as const;
+
 export interface HorizontalScrollProps {
   /** Names the scrolling region for screen readers (it is focusable while it overflows). */
   readonly label: string;
@@ -115,28 +121,19 @@ export function HorizontalScroll({ label, children, buttons, className, minWidth
       </div>
       {more.before && <span className={mergeClasses(styles.fade, styles.fadeStart)} aria-hidden />}
       {more.after && <span className={mergeClasses(styles.fade, styles.fadeEnd)} aria-hidden />}
-      {buttons && more.before && (
-        <Button
-          className={mergeClasses(styles.button, styles.buttonStart)}
-          size="small"
-          shape="circular"
-          icon={<ChevronLeftRegular />}
-          aria-label={`${label}: scroll left`}
-          tabIndex={-1}
-          onClick={() => scroll(-1)}
-        />
-      )}
-      {buttons && more.after && (
-        <Button
-          className={mergeClasses(styles.button, styles.buttonEnd)}
-          size="small"
-          shape="circular"
-          icon={<ChevronRightRegular />}
-          aria-label={`${label}: scroll right`}
-          tabIndex={-1}
-          onClick={() => scroll(1)}
-        />
-      )}
+      {buttons &&
+        SIDES.filter(({ side }) => more[side]).map(({ side, step, icon, words }) => (
+          <Button
+            key={side}
+            className={mergeClasses(styles.button, side === 'before' ? styles.buttonStart : styles.buttonEnd)}
+            size="small"
+            shape="circular"
+            icon={icon}
+            aria-label={`${label}: scroll ${words}`}
+            tabIndex={-1}
+            onClick={() => scroll(step)}
+          />
+        ))}
     </div>
   );
 }
