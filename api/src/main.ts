@@ -12,6 +12,7 @@ if (problem) {
 const { createApp } = await import('./create-app.js');
 const { SeedService } = await import('./seed/seed.service.js');
 const { DatabaseService } = await import('./database/database.service.js');
+const { ROLE_NAMES } = await import('./auth/role.enum.js');
 
 const logger = new Logger('Ligament');
 const app = await createApp().catch((error: unknown) => {
@@ -83,7 +84,7 @@ if (config.demo) {
   );
   lines.push('  Demo sign-ins (every account uses the same demo password):');
   for (const u of SeedService.DEMO_USERS)
-    lines.push(`    ${u.role.padEnd(11)} ${u.email.padEnd(42)} ${SeedService.DEMO_PASSWORD}`);
+    lines.push(`    ${ROLE_NAMES[u.role].padEnd(23)} ${u.email.padEnd(42)} ${SeedService.DEMO_PASSWORD}`);
 }
 lines.push('', CAUTION, '');
 process.stdout.write(`${lines.join('\n')}\n`);

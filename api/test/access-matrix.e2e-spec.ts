@@ -78,6 +78,18 @@ const ROWS: Row[] = [
     allowed: ['admin'],
   },
   {
+    name: 'POST /invitations/:id/resend',
+    method: 'post',
+    path: () => '/api/invitations/999999/resend',
+    allowed: ['admin'],
+  },
+  {
+    name: 'POST /invitations/:id/revoke',
+    method: 'post',
+    path: () => '/api/invitations/999999/revoke',
+    allowed: ['admin'],
+  },
+  {
     name: 'GET /invitations/:token',
     method: 'get',
     path: () => '/api/invitations/inv_unknown',

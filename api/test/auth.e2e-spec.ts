@@ -119,9 +119,14 @@ describe('tokens', () => {
 
   it('refuses a correctly signed token without exp (it would never expire)', async () => {
     const now = Math.floor(Date.now() / 1000);
-    const withExp = handMadeJwt({ sub: 1, role: 'admin', iat: now, exp: now + 600 });
+    // The session id of a real sign-in of the admin (user 1): access tokens must name a live session.
+    const signedIn = await login(t.http, EMAIL.admin);
+    const { sid } = JSON.parse(Buffer.from(signedIn.split('.')[1] ?? '', 'base64url').toString()) as {
+      sid: number;
+    };
+    const withExp = handMadeJwt({ sub: 1, role: 'admin', sid, iat: now, exp: now + 600 });
     expect((await request(t.http).get('/api/auth/me').set(bearer(withExp))).status).toBe(200);
-    const forever = handMadeJwt({ sub: 1, role: 'admin', iat: now });
+    const forever = handMadeJwt({ sub: 1, role: 'admin', sid, iat: now });
     const res = await request(t.http).get('/api/auth/me').set(bearer(forever));
     expect(res.status).toBe(401);
     expect(res.body).toEqual({

@@ -1,8 +1,6 @@
 import type { AddressInfo } from 'node:net';
-import { join } from 'node:path';
-import sqlite3 from 'sqlite3';
 import request from 'supertest';
-import { bearer, bootApp, calcFile, EMAIL, login, type TestApp } from './helpers.js';
+import { bearer, bootApp, calcFile, EMAIL, login, readDatabase, type TestApp } from './helpers.js';
 
 /**
  * Real parallel requests against a file database: the app listens on a port and every request of a
@@ -12,14 +10,7 @@ let t: TestApp;
 let base = '';
 const tok = { admin: '', consultant: '', checker: '' };
 
-function sql<T>(query: string, params: (string | number)[] = []): Promise<T[]> {
-  return new Promise((resolve, reject) => {
-    const db = new sqlite3.Database(join(t.dir, 'test.sqlite'), sqlite3.OPEN_READONLY, (err) => {
-      if (err) return reject(err);
-      db.all(query, params, (e: Error | null, rows: T[]) => db.close(() => (e ? reject(e) : resolve(rows))));
-    });
-  });
-}
+const sql = <T>(query: string, params: (string | number)[] = []) => readDatabase<T>(t, query, params);
 
 function upload(tag: string, claims: Record<string, unknown> = { An: 6.0 }) {
   return request(base)

@@ -3,6 +3,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import request from 'supertest';
+import sqlite3 from 'sqlite3';
 import type { Server } from 'node:http';
 
 export const DEMO_PASSWORD = 'lantern-demo-2026';
@@ -93,4 +94,17 @@ export function calcFile(memberId = 'SP-T1', overrides: Record<string, unknown> 
 
 export function bearer(token: string): { Authorization: string } {
   return { Authorization: `Bearer ${token}` };
+}
+
+/**
+ * Rows from the test app's database file, read on a read-only connection of the test's own (not
+ * through the service), so a test sees what was committed.
+ */
+export function readDatabase<T>(t: TestApp, query: string, params: (string | number)[] = []): Promise<T[]> {
+  return new Promise((resolve, reject) => {
+    const db = new sqlite3.Database(join(t.dir, 'test.sqlite'), sqlite3.OPEN_READONLY, (err) => {
+      if (err) return reject(err);
+      db.all(query, params, (e: Error | null, rows: T[]) => db.close(() => (e ? reject(e) : resolve(rows))));
+    });
+  });
 }

@@ -3,7 +3,7 @@ import type { NestExpressApplication } from '@nestjs/platform-express';
 import { rmSync } from 'node:fs';
 import { join } from 'node:path';
 import request from 'supertest';
-import { bearer, bootApp, EMAIL, login } from './helpers.js';
+import { bearer, bootApp, DEMO_PASSWORD, EMAIL, login } from './helpers.js';
 
 /**
  * The database failing under the service. A read-only file is opened read-only (as SQLite does for a
@@ -14,6 +14,8 @@ let dir = '';
 let dbFile = '';
 let app: NestExpressApplication | null = null;
 const errors: string[] = [];
+/** The checker's access token from a sign-in made while the database could still be written. */
+let checker = '';
 
 async function start(storage: string): Promise<NestExpressApplication> {
   process.env.LIGAMENT_DB = storage;
@@ -27,6 +29,8 @@ beforeAll(async () => {
   const seeded = await bootApp();
   dir = seeded.dir;
   dbFile = join(dir, 'test.sqlite');
+  // A sign-in stores its session, so it is made before the faults; its token names that session.
+  checker = await login(seeded.http, EMAIL.checker);
   await seeded.app.close();
   jest
     .spyOn(Logger.prototype, 'error')
@@ -51,7 +55,13 @@ describe('a read-only database', () => {
     expect(health.body.database).toMatchObject({ ok: false, writable: false });
     expect(health.body.database.error).toMatch(/readonly/);
 
-    const checker = await login(http, EMAIL.checker);
+    // A new sign-in would store a session: refused whole, with the cause, like any other write.
+    const signIn = await request(http)
+      .post('/api/auth/login')
+      .send({ email: EMAIL.checker, password: DEMO_PASSWORD });
+    expect(signIn.status).toBe(503);
+    expect(signIn.body.message).toMatch(/cannot be written .*readonly.*nothing was stored/);
+    // Someone already signed in goes on reading.
     const list = await request(http).get('/api/projects/1/discrepancies?status=open').set(bearer(checker));
     expect(list.status).toBe(200);
     const id = (list.body.items as { id: number; status: string }[]).find((d) => d.status === 'raised')?.id;

@@ -308,6 +308,44 @@ describe('revision diff and recheck (seeded issue A → issue B)', () => {
     expect(north).toMatch(/^\+\s+"An": 5\.508,?$/m);
   });
 
+  it('lists the same changes by meaning: claims old → new with units, and nothing for an unchanged file', async () => {
+    const res = await request(t.http).get('/api/submittals/2/diff').set(bearer(checker));
+    type Change = {
+      scope: string;
+      change: string;
+      memberId?: string;
+      field?: string;
+      before?: string;
+      after?: string;
+    };
+    const files = res.body.files as { currentFile: string | null; changes: Change[] | null }[];
+    const north = files.find((f) => f.currentFile === 'dc-splice-north.json')?.changes ?? [];
+    // The seeded files (api/src/seed/calc/rev-a and rev-b): issue B claims the zigzag chain and its An.
+    expect(north).toEqual(
+      expect.arrayContaining([
+        {
+          scope: 'claim',
+          change: 'changed',
+          memberId: 'SP-N1',
+          field: 'claims.An',
+          label: 'claimed An',
+          before: '6.125 in²',
+          after: '5.508 in²',
+        },
+        {
+          scope: 'claim',
+          change: 'changed',
+          memberId: 'SP-N1',
+          field: 'claims.controllingChain',
+          label: 'claimed controlling chain',
+          before: 'A1–C1 (−x)',
+          after: 'A1–B1–C1–D1 (−x)',
+        },
+      ]),
+    );
+    expect(files.find((f) => f.currentFile === 'hanger-h1.json')?.changes).toEqual([]);
+  });
+
   it('says which discrepancies the revision closed, kept and opened (code + member + chain)', async () => {
     const res = await request(t.http).get('/api/submittals/2/diff').set(bearer(checker));
     const key = (d: { code: string; memberId: string }) => `${d.code} ${d.memberId}`;

@@ -64,5 +64,80 @@ export function createSession(page, server) {
     await page.getByRole('menuitem', { name: 'Sign out' }).click();
     await page.getByRole('heading', { name: 'Sign in' }).waitFor();
   };
-  return { page, server, consoleErrors, shot, go, signIn, signOut };
+  /**
+   * Runs `fn`, then drops the console errors it caused that match `pattern` (a 401 a step expects,
+   * which Chromium logs as a failed resource), so only unexpected errors fail the run.
+   */
+  const expectingConsoleErrors = async (pattern, fn) => {
+    const before = consoleErrors.length;
+    await fn();
+    const during = consoleErrors.splice(before);
+    consoleErrors.push(...during.filter((e) => !pattern.test(e)));
+  };
+  return { page, server, consoleErrors, shot, go, signIn, signOut, expectingConsoleErrors };
+}
+
+/**
+ * What is wrong with the page's structure, as a list of sentences (empty when nothing is):
+ * headings must start at one h1 and never skip a level; no table may run off the screen or cut its
+ * cells, and a table wider than its place must scroll inside a labelled, focusable region.
+ * @param {import('playwright-core').Page} page
+ */
+export function pageProblems(page) {
+  return page.evaluate(() => {
+    const problems = [];
+    const visible = (el) => el.getClientRects().length > 0 && getComputedStyle(el).visibility !== 'hidden';
+    const headings = [...document.querySelectorAll('h1, h2, h3, h4, h5, h6')].filter(
+      (h) => visible(h) && !h.closest('[aria-hidden="true"]'),
+    );
+    const levels = headings.map((h) => Number(h.tagName[1]));
+    if (levels.filter((l) => l === 1).length !== 1)
+      problems.push(`${levels.filter((l) => l === 1).length} h1 headings (want exactly one)`);
+    if (levels[0] !== 1) problems.push(`the first heading is h${levels[0]}, not h1`);
+    levels.forEach((level, i) => {
+      if (i > 0 && level > levels[i - 1] + 1)
+        problems.push(
+          `h${levels[i - 1]} "${headings[i - 1].textContent.trim().slice(0, 40)}" is followed by h${level} "${headings[i].textContent.trim().slice(0, 40)}"`,
+        );
+    });
+    const width = document.documentElement.clientWidth;
+    if (document.documentElement.scrollWidth > width + 1)
+      problems.push(`the page scrolls sideways (${document.documentElement.scrollWidth} px for ${width})`);
+    for (const table of document.querySelectorAll('table, [role="grid"], [role="table"]')) {
+      if (!visible(table)) continue;
+      const name = table.getAttribute('aria-label') ?? table.tagName;
+      let scroller = null;
+      for (let a = table.parentElement; a && a !== document.body; a = a.parentElement) {
+        const overflow = getComputedStyle(a).overflowX;
+        if (overflow === 'auto' || overflow === 'scroll') {
+          scroller = a;
+          break;
+        }
+        if ((overflow === 'hidden' || overflow === 'clip') && a.scrollWidth > a.clientWidth + 1) {
+          problems.push(`table "${name}" is cut off by a container that hides overflow`);
+          break;
+        }
+      }
+      const box = (scroller ?? table).getBoundingClientRect();
+      if (box.right > width + 1)
+        problems.push(`table "${name}" runs off the screen (right edge ${Math.round(box.right)})`);
+      if (scroller && scroller.scrollWidth > scroller.clientWidth + 1) {
+        if (scroller.getAttribute('role') !== 'region' || !scroller.getAttribute('aria-label'))
+          problems.push(`table "${name}" scrolls sideways in a region with no role or name`);
+        if (scroller.tabIndex < 0)
+          problems.push(`table "${name}" scrolls sideways in a region the keyboard cannot reach`);
+      }
+      for (const cell of table.querySelectorAll('td, th, [role="gridcell"], [role="columnheader"]')) {
+        const style = getComputedStyle(cell);
+        if (
+          (style.overflowX === 'hidden' || style.overflowX === 'clip') &&
+          cell.scrollWidth > cell.clientWidth + 1
+        ) {
+          problems.push(`a cell of "${name}" cuts its content: "${cell.textContent.trim().slice(0, 30)}"`);
+          break;
+        }
+      }
+    }
+    return problems;
+  });
 }

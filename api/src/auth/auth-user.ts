@@ -15,6 +15,8 @@ export interface AuthUser {
 export interface JwtPayload {
   readonly sub: number;
   readonly role: Role;
+  /** The browser session (sessions.id) the token was issued for; the session must still be live. */
+  readonly sid: number;
   readonly iat?: number;
   readonly exp?: number;
 }

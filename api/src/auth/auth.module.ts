@@ -9,6 +9,7 @@ import { authConfig } from '../config/index.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { ProjectMember } from '../projects/models/project-member.model.js';
 import { Project } from '../projects/models/project.model.js';
+import { SessionsModule } from '../sessions/sessions.module.js';
 import { Submittal } from '../submittals/models/submittal.model.js';
 import { TokensModule } from '../tokens/tokens.module.js';
 import { UsersModule } from '../users/users.module.js';
@@ -29,6 +30,7 @@ import { ProjectAccessService } from './project-access.service.js';
   imports: [
     UsersModule,
     TokensModule,
+    SessionsModule,
     PassportModule,
     SequelizeModule.forFeature([Project, ProjectMember, Submittal, Discrepancy, CalcFile]),
     JwtModule.registerAsync({

@@ -4,6 +4,7 @@ import { JwtService } from '@nestjs/jwt';
 import { randomBytes } from 'node:crypto';
 import { TooManyRequestsException } from '../common/too-many-requests.exception.js';
 import { authConfig } from '../config/index.js';
+import { SessionsService, type SessionGrant } from '../sessions/sessions.service.js';
 import { UsersService } from '../users/users.service.js';
 import type { AuthUser, JwtPayload } from './auth-user.js';
 import type { LoginDto, LoginResponseDto, MeDto } from './dto/login.dto.js';
@@ -19,6 +20,7 @@ export class AuthService {
     private readonly users: UsersService,
     private readonly jwt: JwtService,
     private readonly attempts: LoginAttemptsService,
+    private readonly sessions: SessionsService,
     @Inject(authConfig.KEY) private readonly config: ConfigType<typeof authConfig>,
   ) {}
 
@@ -27,7 +29,11 @@ export class AuthService {
    * not set a password and a wrong password: no account probing by answer or by time. Only failures
    * count toward the per-account and per-address limits.
    */
-  async login(dto: LoginDto, address: string): Promise<LoginResponseDto> {
+  async login(
+    dto: LoginDto,
+    address: string,
+    userAgent?: string,
+  ): Promise<{ body: LoginResponseDto; grant: SessionGrant }> {
     const wait = this.attempts.retryAfterSeconds(dto.email, address);
     if (wait > 0) {
       throw new TooManyRequestsException(
@@ -43,11 +49,30 @@ export class AuthService {
       throw new UnauthorizedException('E-mail or password is wrong.');
     }
     this.attempts.recordSuccess(dto.email);
-    const payload: JwtPayload = { sub: user.id, role: user.role };
+    const grant = await this.sessions.start(user.id, userAgent);
+    return { body: await this.accessFor(grant), grant };
+  }
+
+  /** A new access token for the session behind a refresh cookie (rotating the cookie's token). */
+  async refresh(presented: string | undefined): Promise<{ body: LoginResponseDto; grant: SessionGrant }> {
+    const grant = await this.sessions.refresh(presented);
+    const body = await this.accessFor(grant);
+    return { body, grant };
+  }
+
+  signOut(presented: string | undefined): Promise<void> {
+    return this.sessions.endByToken(presented);
+  }
+
+  /** An access token naming the session, for its user (who must still be active). */
+  private async accessFor(grant: SessionGrant): Promise<LoginResponseDto> {
+    const user = await this.users.get(grant.userId);
+    if (!user.active) throw new UnauthorizedException('This account has been deactivated.');
+    const payload: JwtPayload = { sub: user.id, role: user.role, sid: grant.sessionId };
     return {
       accessToken: await this.jwt.signAsync(payload),
       expiresIn: this.config.jwtExpiresIn,
-      user: await this.users.get(user.id),
+      user,
     };
   }
 

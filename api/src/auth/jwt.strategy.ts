@@ -25,10 +25,12 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
 
   /**
    * A valid signature is not enough: the token must expire (jsonwebtoken checks `exp` only when it is
-   * present, and a token without one would be good forever) and the user must still exist and be active.
+   * present, and a token without one would be good forever), the user must still exist and be active,
+   * and the session it was issued for must not have ended (signed out, reuse detected, deactivated).
    */
   async validate(payload: JwtPayload): Promise<AuthUser | null> {
     if (typeof payload.exp !== 'number' || !Number.isSafeInteger(payload.sub)) return null;
-    return this.users.findActive(payload.sub);
+    if (!Number.isSafeInteger(payload.sid)) return null;
+    return this.users.findActive(payload.sub, payload.sid);
   }
 }

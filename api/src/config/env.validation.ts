@@ -25,6 +25,9 @@ export class EnvironmentVariables {
   @IsOptional() @IsString() @MinLength(16) JWT_SECRET?: string;
   @IsOptional() @IsString() JWT_EXPIRES_IN?: string;
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) INVITE_TTL_HOURS?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) SESSION_IDLE_HOURS?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) SESSION_MAX_DAYS?: number;
+  @IsOptional() @Type(() => Number) @IsInt() @Min(0) @Max(300) REFRESH_RACE_GRACE_SECONDS?: number;
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_FILE_BYTES?: number;
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_FILES?: number;
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) UPLOAD_MAX_TOTAL_BYTES?: number;

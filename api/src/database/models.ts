@@ -8,6 +8,8 @@ import { Organisation } from '../organisations/models/organisation.model.js';
 import { ProjectMember } from '../projects/models/project-member.model.js';
 import { Project } from '../projects/models/project.model.js';
 import { MemberResult } from '../results/models/member-result.model.js';
+import { RefreshToken } from '../sessions/models/refresh-token.model.js';
+import { Session } from '../sessions/models/session.model.js';
 import { Submittal } from '../submittals/models/submittal.model.js';
 import { ApiToken } from '../tokens/models/api-token.model.js';
 import { Invitation } from '../users/models/invitation.model.js';
@@ -29,4 +31,6 @@ export const MODELS = [
   Event,
   OutboxMessage,
   MailboxMessage,
+  Session,
+  RefreshToken,
 ];

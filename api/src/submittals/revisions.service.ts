@@ -1,6 +1,7 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import { createTwoFilesPatch } from 'diff';
+import { diffDocuments, type CalcDocument } from 'ligament';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import { canonicalJson } from '../common/hash.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
@@ -18,6 +19,25 @@ export function canonicalFileText(file: Pick<CalcFile, 'content' | 'document'>):
 }
 
 type Pairable = Pick<CalcFile, 'id' | 'fileName' | 'memberIds' | 'content' | 'document'>;
+
+/**
+ * The change between two stored documents by meaning; `null` for a side that is absent (an added or
+ * removed file: every member added or removed). Null when a stored document cannot be compared
+ * (written by an engine whose document shape differs): the text diff still shows what changed.
+ */
+export function changesByMeaning(
+  previous: CalcDocument | null,
+  current: CalcDocument | null,
+): FileDiffDto['changes'] {
+  try {
+    if (previous && current) return diffDocuments(previous, current);
+    if (current) return diffDocuments({ ...current, members: [] }, current);
+    if (previous) return diffDocuments(previous, { ...previous, members: [] });
+    return [];
+  } catch {
+    return null;
+  }
+}
 
 /**
  * Pairs each current file with its counterpart in the previous submittal: same file name first, then
@@ -51,6 +71,7 @@ export function pairFiles(previous: readonly Pairable[], current: readonly Paira
         currentFile: file.fileName,
         matchedBy: 'none',
         patch: createTwoFilesPatch('/dev/null', `b/${file.fileName}`, '', canonicalFileText(file)),
+        changes: changesByMeaning(null, file.document),
       });
     }
   }
@@ -61,6 +82,7 @@ export function pairFiles(previous: readonly Pairable[], current: readonly Paira
       currentFile: null,
       matchedBy: 'none',
       patch: createTwoFilesPatch(`a/${p.fileName}`, '/dev/null', canonicalFileText(p), ''),
+      changes: changesByMeaning(p.document, null),
     });
   }
   return out;
@@ -75,6 +97,7 @@ function diffPair(previous: Pairable, current: Pairable, matchedBy: 'file-name' 
     currentFile: current.fileName,
     matchedBy,
     patch: a === b ? '' : createTwoFilesPatch(`a/${previous.fileName}`, `b/${current.fileName}`, a, b),
+    changes: a === b ? [] : changesByMeaning(previous.document, current.document),
   };
 }
 

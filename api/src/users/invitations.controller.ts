@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post } from '@nestjs/common';
 import {
   ApiBearerAuth,
   ApiCreatedResponse,
@@ -50,9 +50,43 @@ export class InvitationsController {
     return (await this.invitations.create(dto, actor)).invitation;
   }
 
+  @Post(':invitationId/resend')
+  @ApiBearerAuth()
+  @Roles(Role.Admin)
+  @ApiOperation({
+    summary:
+      'Admin: send a waiting or expired invitation again with a new link; the old link stops working ' +
+      '(409 when accepted, revoked or already replaced)',
+  })
+  @ApiCreatedResponse({ type: InvitationDto, description: 'The new invitation that replaces it' })
+  async resend(
+    @Param('invitationId', ParseIntPipe) invitationId: number,
+    @CurrentUser() actor: AuthUser,
+  ): Promise<InvitationDto> {
+    return (await this.invitations.resend(invitationId, actor)).invitation;
+  }
+
+  @Post(':invitationId/revoke')
+  @HttpCode(200)
+  @ApiBearerAuth()
+  @Roles(Role.Admin)
+  @ApiOperation({
+    summary: 'Admin: withdraw an invitation; its link stops working (409 when accepted or already replaced)',
+  })
+  @ApiOkResponse({ type: InvitationDto })
+  revoke(
+    @Param('invitationId', ParseIntPipe) invitationId: number,
+    @CurrentUser() actor: AuthUser,
+  ): Promise<InvitationDto> {
+    return this.invitations.revoke(invitationId, actor);
+  }
+
   @Get(':token')
   @Public()
-  @ApiOperation({ summary: 'Public: what an invitation link is for (404 unknown, 410 used or expired)' })
+  @ApiOperation({
+    summary:
+      'Public: what an invitation link is for (404 unknown; 410 used, revoked, replaced or expired, with details [{ state }])',
+  })
   @ApiOkResponse({ type: InvitationPreviewDto })
   preview(@Param('token') token: string): Promise<InvitationPreviewDto> {
     return this.invitations.preview(token);

@@ -105,6 +105,15 @@ function shapeEl(s: Shape): string {
         textEl(s.label),
         '</g>',
       ].join('');
+    case 'claimed-chain':
+      return [
+        `<g data-claimed-chain="${esc(s.holes.join(' '))}"${s.direction ? ` data-direction="${s.direction}"` : ''}${s.netWidth !== undefined ? ` data-net-width="${s.netWidth}"` : ''}>`,
+        s.points.length > 1 ? `<polyline points="${pts(s.points)}" ${strokeAttrs(s.stroke)}/>` : '',
+        ...s.markers.map((m) => `<polygon points="${pts(m)}" ${strokeAttrs(s.stroke)}/>`),
+        s.leader ? line(s.leader.from, s.leader.to, 'leader') : '',
+        textEl(s.label),
+        '</g>',
+      ].join('');
     case 'text':
       return textEl(s);
   }

@@ -29,6 +29,7 @@ export type StrokeName =
   | 'load'
   | 'fracture-minus'
   | 'fracture-plus'
+  | 'claimed'
   | 'leader';
 
 export interface StrokeStyle {
@@ -51,12 +52,14 @@ export const STROKES: Readonly<Record<StrokeName, StrokeStyle>> = {
   load: { width: 0.45, colour: '#1a1a1a' },
   'fracture-minus': { width: 0.5, colour: '#c0392b', dash: [2.4, 1.2] },
   'fracture-plus': { width: 0.5, colour: '#1f5aa6', dash: [0.9, 1.1] },
+  // Solid, thinner than the dashed governing lines, with a diamond at each claimed hole.
+  claimed: { width: 0.4, colour: '#6a3d9a' },
   leader: { width: 0.18, colour: '#444444' },
 };
 
 /** Text roles, for renderers that style them (size and weight are given on each text). */
 export type TextRole =
-  'hole-id' | 'dimension' | 'load' | 'fracture' | 'label' | 'title' | 'title-detail' | 'caution';
+  'hole-id' | 'dimension' | 'load' | 'fracture' | 'claimed' | 'label' | 'title' | 'title-detail' | 'caution';
 
 export interface TextShape {
   readonly kind: 'text';
@@ -151,6 +154,27 @@ export interface FractureShape {
   readonly leader: Segment;
 }
 
+/**
+ * The chain the calc file claims controls, drawn beside the governing fracture lines: edge → hole
+ * centres → far edge as a solid line, a diamond around each of its holes, and a label below the plate.
+ */
+export interface ClaimedChainShape {
+  readonly kind: 'claimed-chain';
+  /** The claimed hole ids, as the file gives them. */
+  readonly holes: readonly string[];
+  readonly direction?: LoadDirection;
+  /** The claimed net width, member units, when the file claims one. */
+  readonly netWidth?: number;
+  /** Through the centres of the claimed holes found on the plate; empty when none is. */
+  readonly points: readonly Point[];
+  /** One closed diamond around each claimed hole found on the plate. */
+  readonly markers: readonly (readonly Point[])[];
+  readonly stroke: StrokeName;
+  readonly label: TextShape;
+  /** From the line's end at the plate edge to the label. */
+  readonly leader?: Segment;
+}
+
 /** A plain rectangle (frame, title block cells), paper mm. */
 export interface RectShape {
   readonly kind: 'rect';
@@ -169,6 +193,7 @@ export type Shape =
   | DimensionShape
   | ArrowShape
   | FractureShape
+  | ClaimedChainShape
   | RectShape;
 
 export interface Drawing {

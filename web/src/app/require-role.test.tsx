@@ -1,4 +1,4 @@
-import { screen } from '@testing-library/react';
+import { act, screen } from '@testing-library/react';
 import { Route, Routes } from 'react-router-dom';
 import { afterEach, describe, expect, it } from 'vitest';
 import { sessionStore } from '@/lib/session';
@@ -25,6 +25,20 @@ describe('RequireRole', () => {
   it('sends a signed-out visitor to sign in', () => {
     renderWithProviders(tree, { route: '/admin' });
     expect(screen.getByText('sign-in page')).toBeInTheDocument();
+  });
+
+  it('waits, instead of sending to sign in, while the session is being restored from the refresh cookie', () => {
+    sessionStore.restoring();
+    renderWithProviders(tree, { route: '/admin' });
+    expect(screen.getByText('Signing you in again…')).toBeInTheDocument();
+    expect(screen.queryByText('sign-in page')).not.toBeInTheDocument();
+    act(() =>
+      sessionStore.set({
+        token: 't',
+        user: { id: 1, email: 'sam@tidewater-crossing.example.test', name: 'Sam Oduya', role: 'admin' },
+      }),
+    );
+    expect(screen.getByText('admin page')).toBeInTheDocument();
   });
 
   it('tells a signed-in user when the page is not for their role', () => {

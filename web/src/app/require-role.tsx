@@ -1,8 +1,8 @@
 import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
-import { EmptyState } from '@/components/states';
+import { EmptyState, LoadingState } from '@/components/states';
 import { paths } from '@/config/paths';
-import { useSession, type Role } from '@/lib/session';
+import { useSession, useSessionStatus, type Role } from '@/lib/session';
 import { roleLabels } from './layout/nav-items';
 
 export interface RequireRoleProps {
@@ -14,7 +14,9 @@ export interface RequireRoleProps {
 /** Sends a signed-out visitor to sign in (and back afterwards); tells a signed-in one when a page is not for their role. */
 export function RequireRole({ roles, children }: RequireRoleProps) {
   const session = useSession();
+  const status = useSessionStatus();
   const location = useLocation();
+  if (status === 'restoring') return <LoadingState label="Signing you in again…" />;
   if (!session) {
     return <Navigate to={paths.signIn.getHref(`${location.pathname}${location.search}`)} replace />;
   }

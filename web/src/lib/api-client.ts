@@ -4,6 +4,7 @@ import { ApiError, toApiError } from './api-error';
 import type { paths } from './api-types';
 import { notify } from './notify';
 import { sessionStore } from './session';
+import { renewSession } from './session-api';
 
 /** Called when the API refuses the session (401): the app sends the user to sign in and back. */
 let onUnauthorized: (() => void) | null = null;
@@ -12,33 +13,64 @@ export function setUnauthorizedHandler(handler: () => void): void {
 }
 
 const SIGN_IN_PATH = '/auth/login';
+/** Renew the access token this long before it runs out, rather than wait for a refusal. */
+const RENEW_AHEAD_MS = 60_000;
+
+/** Copies of requests sent with a session, kept until their answer, to send once more after a renewal. */
+const retries = new Map<string, Request>();
+
+const withToken = (request: Request, token: string): Request => {
+  request.headers.set('Authorization', `Bearer ${token}`);
+  return request;
+};
 
 const middleware: Middleware = {
-  onRequest({ request }) {
-    const token = sessionStore.get()?.token;
-    if (token && !request.headers.has('Authorization'))
-      request.headers.set('Authorization', `Bearer ${token}`);
+  async onRequest({ request, id }) {
+    let session = sessionStore.get();
+    if (!session || request.headers.has('Authorization')) return request;
+    if (session.expiresAt !== undefined && session.expiresAt - Date.now() < RENEW_AHEAD_MS)
+      session = (await renewSession()) ?? session;
+    withToken(request, session.token);
+    retries.set(id, request.clone());
     return request;
   },
-  async onResponse({ request, response }) {
+  async onResponse({ request, response, id, options }) {
+    const retry = retries.get(id);
+    retries.delete(id);
     if (response.ok) return response;
-    const body: unknown = await response
-      .clone()
-      .json()
-      .catch(() => null);
-    const error = toApiError(response.status, response.statusText, body);
-    const isSignIn = new URL(request.url).pathname.endsWith(SIGN_IN_PATH);
-    if (response.status === 401 && !isSignIn) {
-      sessionStore.clear();
-      onUnauthorized?.();
-      throw error;
+    // An access token refused on the way (expired, or the tab slept): renew once and send again.
+    if (response.status === 401 && retry) {
+      const renewed = await renewSession();
+      if (renewed) {
+        const again = await options.fetch(withToken(retry, renewed.token));
+        if (again.status !== 401) return again.ok ? again : failure(request, again);
+      }
     }
-    // Reads show their own error state in the view; a failed change is also toasted.
-    if (request.method !== 'GET' && !isSignIn)
-      notify({ intent: 'error', title: error.error, body: error.message });
-    throw error;
+    return failure(request, response);
+  },
+  onError({ id }) {
+    retries.delete(id);
   },
 };
+
+/** Throws the ApiError of a refused answer; a refused session also sends the user to sign in. */
+async function failure(request: Request, response: Response): Promise<never> {
+  const body: unknown = await response
+    .clone()
+    .json()
+    .catch(() => null);
+  const error = toApiError(response.status, response.statusText, body);
+  const isSignIn = new URL(request.url).pathname.endsWith(SIGN_IN_PATH);
+  if (response.status === 401 && !isSignIn) {
+    sessionStore.clear();
+    onUnauthorized?.();
+    throw error;
+  }
+  // Reads show their own error state in the view; a failed change is also toasted.
+  if (request.method !== 'GET' && !isSignIn)
+    notify({ intent: 'error', title: error.error, body: error.message });
+  throw error;
+}
 
 /** The typed client for every call to the Ligament API (types generated from api/openapi.json). */
 export const api = createClient<paths>({ baseUrl: env.apiOrigin || window.location.origin });

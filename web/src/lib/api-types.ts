@@ -13,8 +13,42 @@ export interface paths {
     };
     get?: never;
     put?: never;
-    /** Sign in with e-mail and password (failed attempts limited per account and per client address) */
+    /** Sign in with e-mail and password (failed attempts limited per account and per client address); also sets the httpOnly refresh cookie of a new browser session */
     post: operations['AuthController_login'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/auth/session/refresh': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** A new access token for the browser session in the refresh cookie; the cookie’s token is replaced (a used one presented again ends the session) */
+    post: operations['AuthController_refresh'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/auth/session/sign-out': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Sign out: ends the browser session on the server (every tab) and clears the refresh cookie */
+    post: operations['AuthController_signOut'];
     delete?: never;
     options?: never;
     head?: never;
@@ -90,6 +124,40 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  '/api/invitations/{invitationId}/resend': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Admin: send a waiting or expired invitation again with a new link; the old link stops working (409 when accepted, revoked or already replaced) */
+    post: operations['InvitationsController_resend'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/invitations/{invitationId}/revoke': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Admin: withdraw an invitation; its link stops working (409 when accepted or already replaced) */
+    post: operations['InvitationsController_revoke'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   '/api/invitations/{token}': {
     parameters: {
       query?: never;
@@ -97,7 +165,7 @@ export interface paths {
       path?: never;
       cookie?: never;
     };
-    /** Public: what an invitation link is for (404 unknown, 410 used or expired) */
+    /** Public: what an invitation link is for (404 unknown; 410 used, revoked, replaced or expired, with details [{ state }]) */
     get: operations['InvitationsController_preview'];
     put?: never;
     post?: never;
@@ -691,7 +759,10 @@ export interface components {
     LoginResponseDto: {
       /** @description Send as `Authorization: Bearer <accessToken>` */
       accessToken: string;
-      /** @example 8h */
+      /**
+       * @description Lifetime of the access token
+       * @example 15m
+       */
       expiresIn: string;
       user: components['schemas']['UserDto'];
     };
@@ -735,10 +806,19 @@ export interface components {
       name: string;
       role: components['schemas']['Role'];
       organisationId: number | null;
+      /**
+       * @description waiting (the link works), accepted, expired, revoked by an admin, or replaced by a resent invitation
+       * @enum {string}
+       */
+      state: 'waiting' | 'accepted' | 'expired' | 'revoked' | 'replaced';
       /** Format: date-time */
       expiresAt: string;
       /** Format: date-time */
       acceptedAt: string | null;
+      /** Format: date-time */
+      revokedAt: string | null;
+      /** @description The invitation that replaced this one */
+      replacedById: number | null;
       /** Format: date-time */
       createdAt: string;
     };
@@ -1013,6 +1093,34 @@ export interface components {
       /** @example http://localhost:3000/submittals/12 */
       webUrl: string;
     };
+    DocumentChangeDto: {
+      /** @enum {string} */
+      scope: 'profile' | 'member' | 'hole' | 'claim';
+      /** @enum {string} */
+      change: 'added' | 'removed' | 'changed' | 'moved';
+      memberId?: string;
+      holeId?: string;
+      /**
+       * @description Path of the field in the normalised document
+       * @example claims.An
+       */
+      field?: string;
+      /**
+       * @description The field in words
+       * @example claimed An
+       */
+      label?: string;
+      /**
+       * @description Old value with its unit
+       * @example 5.75 in²
+       */
+      before?: string;
+      /**
+       * @description New value with its unit
+       * @example 5.125 in²
+       */
+      after?: string;
+    };
     FileDiffDto: {
       /** @enum {string} */
       change: 'changed' | 'unchanged' | 'added' | 'removed';
@@ -1025,6 +1133,8 @@ export interface components {
       matchedBy: 'file-name' | 'member-ids' | 'none';
       /** @description Unified diff (diff package) of the canonical JSON (sorted keys, 2 spaces); "" when unchanged */
       patch: string;
+      /** @description The same change by meaning: members, holes and claims old → new with units (every member of an added or removed file); null when a stored document could not be compared */
+      changes: components['schemas']['DocumentChangeDto'][] | null;
     };
     DiffDiscrepancyDto: {
       id: number;
@@ -1435,6 +1545,76 @@ export interface operations {
       };
     };
   };
+  AuthController_refresh: {
+    parameters: {
+      query?: never;
+      header: {
+        /** @description Must be `1`; with the Origin check, the defence against cross-site request forgery */
+        'X-Ligament-Session': string;
+      };
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['LoginResponseDto'];
+        };
+      };
+      /** @description No session, or it has ended; the cookie is cleared */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
+        };
+      };
+      /** @description Missing X-Ligament-Session header or a foreign Origin */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
+        };
+      };
+    };
+  };
+  AuthController_signOut: {
+    parameters: {
+      query?: never;
+      header: {
+        /** @description Must be `1`; with the Origin check, the defence against cross-site request forgery */
+        'X-Ligament-Session': string;
+      };
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description Signed out (also when there was no session) */
+      204: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description Missing X-Ligament-Session header or a foreign Origin */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorBody'];
+        };
+      };
+    };
+  };
   AuthController_me: {
     parameters: {
       query?: never;
@@ -1531,6 +1711,49 @@ export interface operations {
     };
     responses: {
       201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['InvitationDto'];
+        };
+      };
+    };
+  };
+  InvitationsController_resend: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        invitationId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description The new invitation that replaces it */
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['InvitationDto'];
+        };
+      };
+    };
+  };
+  InvitationsController_revoke: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        invitationId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
         headers: {
           [name: string]: unknown;
         };

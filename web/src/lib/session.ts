@@ -18,30 +18,49 @@ export interface Session {
 }
 
 /**
- * The signed-in session lives in memory only: never in localStorage or a cookie, so a reload or a
- * closed tab signs the user out and a script injected into another page cannot read it. When the
- * token expires the API answers 401 and the client sends the user back to sign in, to return to
- * the same page afterwards.
+ * `restoring` while the app asks the API whether this browser still has a session (its httpOnly
+ * refresh cookie), at start-up; then `signed-in` or `signed-out`.
  */
-let current: Session | null = null;
+export type SessionStatus = 'restoring' | 'signed-in' | 'signed-out';
+
+interface Snapshot {
+  readonly status: SessionStatus;
+  readonly session: Session | null;
+}
+
+/**
+ * The access token lives in memory only, never in localStorage or a script-readable cookie, so a
+ * script injected into a page cannot take it away. What survives a reload or a new tab is the
+ * refresh cookie, which only the browser and the API see (lib/session-api.ts renews from it).
+ */
+let snapshot: Snapshot = { status: 'signed-out', session: null };
 const listeners = new Set<() => void>();
 
-function emit(): void {
+function update(next: Snapshot): void {
+  snapshot = next;
   for (const listener of listeners) listener();
 }
 
 export const sessionStore = {
   get(): Session | null {
-    return current;
+    return snapshot.session;
+  },
+  status(): SessionStatus {
+    return snapshot.status;
+  },
+  snapshot(): Snapshot {
+    return snapshot;
   },
   set(session: Session): void {
-    current = session;
-    emit();
+    update({ status: 'signed-in', session });
+  },
+  /** The app is asking the API for the session the refresh cookie holds. */
+  restoring(): void {
+    if (snapshot.status !== 'signed-in') update({ status: 'restoring', session: null });
   },
   clear(): void {
-    if (current === null) return;
-    current = null;
-    emit();
+    if (snapshot.status === 'signed-out') return;
+    update({ status: 'signed-out', session: null });
   },
   subscribe(listener: () => void): () => void {
     listeners.add(listener);
@@ -51,4 +70,8 @@ export const sessionStore = {
 
 export function useSession(): Session | null {
   return useSyncExternalStore(sessionStore.subscribe, sessionStore.get, sessionStore.get);
+}
+
+export function useSessionStatus(): SessionStatus {
+  return useSyncExternalStore(sessionStore.subscribe, sessionStore.status, sessionStore.status);
 }

@@ -9,7 +9,7 @@ export class LoginDto {
 
 export class LoginResponseDto {
   @ApiProperty({ description: 'Send as `Authorization: Bearer <accessToken>`' }) accessToken: string;
-  @ApiProperty({ example: '8h' }) expiresIn: string;
+  @ApiProperty({ example: '15m', description: 'Lifetime of the access token' }) expiresIn: string;
   @ApiProperty({ type: UserDto }) user: UserDto;
 }
 

@@ -1,4 +1,19 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+
+/** One change between two versions of a calc file, by meaning (ligament's diffDocuments). */
+export class DocumentChangeDto {
+  @ApiProperty({ enum: ['profile', 'member', 'hole', 'claim'] }) scope:
+    'profile' | 'member' | 'hole' | 'claim';
+  @ApiProperty({ enum: ['added', 'removed', 'changed', 'moved'] }) change:
+    'added' | 'removed' | 'changed' | 'moved';
+  @ApiPropertyOptional() memberId?: string;
+  @ApiPropertyOptional() holeId?: string;
+  @ApiPropertyOptional({ example: 'claims.An', description: 'Path of the field in the normalised document' })
+  field?: string;
+  @ApiPropertyOptional({ example: 'claimed An', description: 'The field in words' }) label?: string;
+  @ApiPropertyOptional({ example: '5.75 in²', description: 'Old value with its unit' }) before?: string;
+  @ApiPropertyOptional({ example: '5.125 in²', description: 'New value with its unit' }) after?: string;
+}
 
 export class FileDiffDto {
   @ApiProperty({ enum: ['changed', 'unchanged', 'added', 'removed'] }) change:
@@ -12,6 +27,14 @@ export class FileDiffDto {
       'Unified diff (diff package) of the canonical JSON (sorted keys, 2 spaces); "" when unchanged',
   })
   patch: string;
+  @ApiProperty({
+    type: [DocumentChangeDto],
+    nullable: true,
+    description:
+      'The same change by meaning: members, holes and claims old → new with units (every member of an ' +
+      'added or removed file); null when a stored document could not be compared',
+  })
+  changes: DocumentChangeDto[] | null;
 }
 
 export class DiffDiscrepancyDto {

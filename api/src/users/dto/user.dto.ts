@@ -31,14 +31,26 @@ export class CreateInvitationDto {
   @ApiPropertyOptional() @IsOptional() @IsInt() @Min(1) organisationId?: number;
 }
 
+export const INVITATION_STATES = ['waiting', 'accepted', 'expired', 'revoked', 'replaced'] as const;
+export type InvitationState = (typeof INVITATION_STATES)[number];
+
 export class InvitationDto {
   @ApiProperty() id: number;
   @ApiProperty() email: string;
   @ApiProperty() name: string;
   @ApiProperty({ enum: Role, enumName: 'Role' }) role: Role;
   @ApiProperty({ nullable: true, type: Number }) organisationId: number | null;
+  @ApiProperty({
+    enum: INVITATION_STATES,
+    description:
+      'waiting (the link works), accepted, expired, revoked by an admin, or replaced by a resent invitation',
+  })
+  state: InvitationState;
   @ApiProperty({ format: 'date-time' }) expiresAt: string;
   @ApiProperty({ format: 'date-time', nullable: true, type: String }) acceptedAt: string | null;
+  @ApiProperty({ format: 'date-time', nullable: true, type: String }) revokedAt: string | null;
+  @ApiProperty({ nullable: true, type: Number, description: 'The invitation that replaced this one' })
+  replacedById: number | null;
   @ApiProperty({ format: 'date-time' }) createdAt: string;
 }
 

@@ -17,4 +17,13 @@ export class Invitation extends Model {
   @Column({ type: DataType.DATE, allowNull: false }) declare expiresAt: Date;
   @Column({ type: DataType.DATE, allowNull: true }) declare acceptedAt: Date | null;
   @ForeignKey(() => User) @Column({ type: DataType.INTEGER, allowNull: true }) declare userId: number | null;
+  /** Withdrawn by an admin: the link is dead. */
+  @Column({ type: DataType.DATE, allowNull: true }) declare revokedAt: Date | null;
+  @ForeignKey(() => User)
+  @Column({ type: DataType.INTEGER, allowNull: true })
+  declare revokedById: number | null;
+  /** Sent again with a new link (that invitation's id): this one's link is dead. */
+  @ForeignKey(() => Invitation)
+  @Column({ type: DataType.INTEGER, allowNull: true })
+  declare replacedById: number | null;
 }

@@ -13,9 +13,15 @@ import {
   tokens,
   Tooltip,
 } from '@fluentui/react-components';
-import { SignOutRegular, WeatherMoonRegular, WeatherSunnyRegular } from '@fluentui/react-icons';
-import { Suspense } from 'react';
-import { NavLink, Outlet, useMatches, useNavigate } from 'react-router-dom';
+import {
+  DismissRegular,
+  NavigationRegular,
+  SignOutRegular,
+  WeatherMoonRegular,
+  WeatherSunnyRegular,
+} from '@fluentui/react-icons';
+import { Suspense, useState, type KeyboardEvent } from 'react';
+import { NavLink, Outlet, useLocation, useMatches, useNavigate } from 'react-router-dom';
 import { LogoMark } from '@/components/logo-mark';
 import { LoadingState } from '@/components/states';
 import { CAUTION } from 'ligament/engine';
@@ -25,6 +31,9 @@ import { useServerInfo } from '@/lib/server-info';
 import { useSession } from '@/lib/session';
 import { useThemeChoice } from '../theme/theme-choice';
 import { navItems, roleLabels } from './nav-items';
+
+/** Below this width the navigation folds into a menu button. */
+const NARROW = '@media (max-width: 760px)';
 
 const useStyles = makeStyles({
   root: {
@@ -54,6 +63,10 @@ const useStyles = makeStyles({
     rowGap: tokens.spacingVerticalXS,
     padding: `${tokens.spacingVerticalS} ${tokens.spacingHorizontalXL}`,
     '@media print': { display: 'none' },
+    [NARROW]: {
+      columnGap: tokens.spacingHorizontalS,
+      padding: `${tokens.spacingVerticalS} ${tokens.spacingHorizontalM}`,
+    },
   },
   brand: {
     display: 'flex',
@@ -69,7 +82,29 @@ const useStyles = makeStyles({
     fontWeight: tokens.fontWeightSemibold,
     letterSpacing: '0.02em',
   },
-  nav: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalXS, flexGrow: 1 },
+  nav: {
+    display: 'flex',
+    flexWrap: 'wrap',
+    gap: tokens.spacingHorizontalXS,
+    flexGrow: 1,
+    [NARROW]: { display: 'none' },
+  },
+  // On a narrow screen the navigation is a list under the header, opened by the menu button.
+  navOpen: {
+    [NARROW]: {
+      display: 'flex',
+      flexDirection: 'column',
+      order: 3,
+      flexBasis: '100%',
+      paddingBottom: tokens.spacingVerticalS,
+    },
+  },
+  menuButton: {
+    display: 'none',
+    color: tokens.colorNeutralForegroundOnBrand,
+    ':hover': { color: tokens.colorNeutralForeground1 },
+    [NARROW]: { display: 'inline-flex', minWidth: 'auto' },
+  },
   navLink: {
     color: tokens.colorNeutralForegroundOnBrand,
     textDecorationLine: 'none',
@@ -87,8 +122,16 @@ const useStyles = makeStyles({
   onBrandButton: {
     color: tokens.colorNeutralForegroundOnBrand,
     ':hover': { color: tokens.colorNeutralForeground1 },
+    // Fluent buttons are at least 96 px wide; with the name hidden the avatar needs far less.
+    [NARROW]: { minWidth: 'auto' },
   },
-  user: { display: 'flex', flexDirection: 'column', lineHeight: tokens.lineHeightBase200, textAlign: 'left' },
+  user: {
+    display: 'flex',
+    flexDirection: 'column',
+    lineHeight: tokens.lineHeightBase200,
+    textAlign: 'left',
+    [NARROW]: { display: 'none' },
+  },
   main: {
     flexGrow: 1,
     width: '100%',
@@ -131,6 +174,17 @@ export function AppShell() {
   const { choice, toggle } = useThemeChoice();
   const workspace = useWorkspaceLayout();
   const role = session?.user.role;
+  const location = useLocation();
+  // The menu stays open on the page it was opened on: following a link closes it.
+  const here = `${location.pathname}${location.search}`;
+  const [menuOpenAt, setMenuOpenAt] = useState<string | null>(null);
+  const menuOpen = menuOpenAt === here;
+  const closeOnEscape = (event: KeyboardEvent) => {
+    if (event.key === 'Escape' && menuOpen) {
+      setMenuOpenAt(null);
+      document.getElementById('main-menu-button')?.focus();
+    }
+  };
   const demo = serverInfo.data?.demo === true;
   const items = navItems.filter((item) => role && item.roles.includes(role) && (!item.demoOnly || demo));
 
@@ -139,16 +193,32 @@ export function AppShell() {
       <a className={styles.skip} href="#main">
         Skip to content
       </a>
-      <header className={styles.header}>
+      <header className={styles.header} onKeyDown={closeOnEscape}>
         <NavLink to={paths.home.getHref()} className={styles.brand} aria-label="Ligament home">
           <LogoMark size={30} onBrand />
           <span className={styles.wordmark}>Ligament</span>
         </NavLink>
-        <nav aria-label="Main" className={styles.nav}>
+        <Button
+          id="main-menu-button"
+          appearance="transparent"
+          className={styles.menuButton}
+          icon={menuOpen ? <DismissRegular /> : <NavigationRegular />}
+          aria-expanded={menuOpen}
+          aria-controls="main-navigation"
+          onClick={() => setMenuOpenAt(menuOpen ? null : here)}
+        >
+          Menu
+        </Button>
+        <nav
+          id="main-navigation"
+          aria-label="Main"
+          className={mergeClasses(styles.nav, menuOpen && styles.navOpen)}
+        >
           {items.map((item) => (
             <NavLink
               key={item.href}
               to={item.href}
+              onClick={() => setMenuOpenAt(null)}
               className={({ isActive }) =>
                 isActive ? `${styles.navLink} ${styles.navLinkActive}` : styles.navLink
               }
@@ -194,8 +264,7 @@ export function AppShell() {
                   <MenuItem
                     icon={<SignOutRegular />}
                     onClick={() => {
-                      signOut();
-                      navigate(paths.signIn.getHref(), { replace: true });
+                      void signOut().finally(() => navigate(paths.signIn.getHref(), { replace: true }));
                     }}
                   >
                     Sign out

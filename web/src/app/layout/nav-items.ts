@@ -32,9 +32,4 @@ export const navItems: readonly NavItem[] = [
   },
 ];
 
-export const roleLabels: Record<Role, string> = {
-  admin: 'Admin',
-  checker: 'Checker',
-  consultant: 'Consultant',
-  'owner-rep': "Owner's rep",
-};
+export { roleLabels } from '@/lib/roles';

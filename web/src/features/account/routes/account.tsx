@@ -11,10 +11,12 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { KeyRegular } from '@fluentui/react-icons';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 import { formatDateTime } from '@/lib/format';
+import { roleLabel } from '@/lib/roles';
 import { useSession } from '@/lib/session';
 import { useAccountProjects } from '../api/get-account-projects';
 import { useTokens } from '../api/get-tokens';
@@ -31,7 +33,6 @@ const useStyles = makeStyles({
   },
   label: { color: tokens.colorNeutralForeground3 },
   mono: { fontFamily: tokens.fontFamilyMonospace },
-  wrap: { overflowX: 'auto' },
 });
 
 export function Component() {
@@ -50,13 +51,12 @@ export function Component() {
       <Section title="Signed in" labelId="session-heading">
         <div className={styles.facts}>
           <span className={styles.label}>Role</span>
-          <span>{session.user.role}</span>
-          <span className={styles.label}>Session ends</span>
+          <span>{roleLabel(session.user.role)}</span>
+          <span className={styles.label}>This browser</span>
           <span>
-            {session.expiresAt
-              ? formatDateTime(new Date(session.expiresAt).toISOString())
-              : 'when the server says so'}
-            ; the session is kept in this tab only, so a reload or a new tab asks you to sign in again.
+            Stays signed in across reloads and new tabs until you sign out, or until it goes unused for as
+            long as the server allows (a week unless your admin set otherwise). Signing out ends the session
+            on the server, for every tab.
           </span>
         </div>
       </Section>
@@ -87,7 +87,7 @@ export function Component() {
             ) : tokens_.data.length === 0 ? (
               <EmptyState title="No tokens yet" icon={<KeyRegular />} />
             ) : (
-              <div className={styles.wrap}>
+              <HorizontalScroll label="API tokens, table" minWidth="640px">
                 <Table aria-label="API tokens">
                   <TableHeader>
                     <TableRow>
@@ -127,7 +127,7 @@ export function Component() {
                     ))}
                   </TableBody>
                 </Table>
-              </div>
+              </HorizontalScroll>
             )}
           </Section>
           {projects.data?.[0] && (

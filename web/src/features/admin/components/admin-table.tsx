@@ -9,11 +9,12 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import type { Key, ReactNode } from 'react';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 
 const useStyles = makeStyles({
   // Fluent's Dropdown keeps a 250 px minimum; in a cell it ran over the next column (Role over Active).
-  wrap: { overflowX: 'auto', '& .fui-Dropdown': { minWidth: 0, width: '100%' } },
+  wrap: { '& .fui-Dropdown': { minWidth: 0, width: '100%' } },
   columns: {
     display: 'grid',
     gridTemplateColumns: 'minmax(0, 1fr) minmax(0, 1fr)',
@@ -62,6 +63,8 @@ export interface AdminTableProps<T> {
   readonly size?: 'small' | 'medium';
   /** Marks the row the panel beside the table is showing (`aria-selected`). */
   readonly isSelected?: (row: T) => boolean;
+  /** The table's least width; narrower screens scroll it sideways (default 640px). */
+  readonly minWidth?: string;
   /** A panel beside the table (below it on narrow screens), given the loaded rows. */
   readonly aside?: (rows: readonly T[]) => ReactNode;
 }
@@ -80,6 +83,7 @@ export function AdminTable<T>({
   size,
   isSelected,
   aside,
+  minWidth = '640px',
 }: AdminTableProps<T>) {
   const styles = useStyles();
   if (query.isPending) return <LoadingState label={loadingLabel} />;
@@ -89,7 +93,7 @@ export function AdminTable<T>({
   if (rows.length === 0 && emptyTitle) return <EmptyState title={emptyTitle} />;
 
   const table = (
-    <div className={styles.wrap}>
+    <HorizontalScroll label={`${label}, table`} className={styles.wrap} minWidth={minWidth}>
       <Table size={size} aria-label={label}>
         <TableHeader>
           <TableRow>
@@ -110,7 +114,7 @@ export function AdminTable<T>({
           ))}
         </TableBody>
       </Table>
-    </div>
+    </HorizontalScroll>
   );
   if (!aside) return table;
   return (

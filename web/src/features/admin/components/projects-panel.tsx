@@ -11,6 +11,7 @@ import {
 } from '@fluentui/react-components';
 import { useState } from 'react';
 import type { Schema } from '@/lib/api-schemas';
+import { roleLabel } from '@/lib/roles';
 import { useChangeProjectMembers } from '../api/change-project-members';
 import { createProjectInputSchema, useCreateProject } from '../api/create-project';
 import { useAdminProjects } from '../api/get-admin-projects';
@@ -41,7 +42,7 @@ function MembersEditor({ projectId }: { projectId: number }) {
   const [userId, setUserId] = useState<number | undefined>();
   const columns: AdminColumn<Member>[] = [
     { id: 'member', header: 'Member', cell: (m) => m.name },
-    { id: 'role', header: 'Role', cell: (m) => m.role },
+    { id: 'role', header: 'Role', cell: (m) => roleLabel(m.role) },
     {
       id: 'remove',
       header: 'Remove',
@@ -79,7 +80,7 @@ function MembersEditor({ projectId }: { projectId: number }) {
             >
               {candidates.map((u) => (
                 <Option key={u.id} value={String(u.id)} text={u.name}>
-                  {u.name} ({u.role})
+                  {u.name} ({roleLabel(u.role)})
                 </Option>
               ))}
             </Dropdown>

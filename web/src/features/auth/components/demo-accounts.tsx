@@ -40,7 +40,7 @@ const DEMO_ACCOUNTS = [
   },
   {
     name: 'Adaeze Marlow',
-    role: "Owner's rep · Tidewater Crossing Authority",
+    role: 'Owner’s representative · Tidewater Crossing Authority',
     email: 'adaeze@tidewater-crossing.example.test',
   },
   { name: 'Sam Oduya', role: 'Admin', email: 'sam@tidewater-crossing.example.test' },

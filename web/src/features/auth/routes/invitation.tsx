@@ -11,12 +11,13 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { useState } from 'react';
-import { Link, useParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { LogoMark } from '@/components/logo-mark';
 import { ErrorState, LoadingState } from '@/components/states';
 import { CAUTION } from 'ligament/engine';
 import { paths } from '@/config/paths';
-import { describeError } from '@/lib/api-error';
+import { ApiError, describeError } from '@/lib/api-error';
+import { roleLabel } from '@/lib/roles';
 import { acceptInvitationInputSchema, useAcceptInvitation } from '../api/accept-invitation';
 import { useInvitation } from '../api/get-invitation';
 
@@ -39,6 +40,28 @@ const useStyles = makeStyles({
   },
   brand: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
 });
+
+/**
+ * A link that can no longer be used (already used, withdrawn, sent again, expired or unknown): what
+ * happened, in words, and the way on, which is signing in (or asking the admin for a new link).
+ */
+function DeadLink({ error }: { error: unknown }) {
+  const navigate = useNavigate();
+  const gone = error instanceof ApiError && (error.statusCode === 410 || error.statusCode === 404);
+  if (!gone) return <ErrorState error={error} title="The invitation could not be read" />;
+  return (
+    <>
+      <Title2 as="h1">This invitation link cannot be used</Title2>
+      <Text>{error.message}</Text>
+      <Text>
+        If you already have an account, sign in. Otherwise ask your Ligament admin for a new invitation.
+      </Text>
+      <Button appearance="primary" onClick={() => navigate(paths.signIn.getHref(), { replace: true })}>
+        Go to sign in
+      </Button>
+    </>
+  );
+}
 
 export function Component() {
   const styles = useStyles();
@@ -73,7 +96,7 @@ export function Component() {
         {invitation.isPending ? (
           <LoadingState label="Reading the invitation…" />
         ) : invitation.isError ? (
-          <ErrorState error={invitation.error} title="This invitation cannot be used" />
+          <DeadLink error={invitation.error} />
         ) : accept.isSuccess ? (
           <>
             <Title2 as="h1">You are in</Title2>
@@ -84,7 +107,7 @@ export function Component() {
           <>
             <Title2 as="h1">Welcome, {invitation.data.name}</Title2>
             <Text>
-              You are invited as {invitation.data.role}
+              You are invited as {roleLabel(invitation.data.role).toLowerCase()}
               {invitation.data.organisation ? ` for ${invitation.data.organisation}` : ''} (
               {invitation.data.email}). Choose a password to activate the account.
             </Text>

@@ -5,7 +5,8 @@ import { LogoMark } from '@/components/logo-mark';
 import { CAUTION } from 'ligament/engine';
 import { paths } from '@/config/paths';
 import { signIn } from '@/lib/auth';
-import { useSession } from '@/lib/session';
+import { useSession, useSessionStatus } from '@/lib/session';
+import { LoadingState } from '@/components/states';
 import { DemoAccounts } from '../components/demo-accounts';
 import { SignInForm, type SignInInput } from '../components/sign-in-form';
 
@@ -44,6 +45,7 @@ const useStyles = makeStyles({
 export function Component() {
   const styles = useStyles();
   const session = useSession();
+  const status = useSessionStatus();
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const redirectTo = params.get('redirectTo');
@@ -57,6 +59,7 @@ export function Component() {
   });
 
   if (session && !mutation.isPending) return <Navigate to={target} replace />;
+  if (status === 'restoring') return <LoadingState label="Signing you in again…" />;
 
   return (
     <div className={styles.page}>

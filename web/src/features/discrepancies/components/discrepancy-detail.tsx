@@ -21,6 +21,7 @@ import { ErrorState, LoadingState } from '@/components/states';
 import { paths } from '@/config/paths';
 import { describeError } from '@/lib/api-error';
 import { formatDateTime } from '@/lib/format';
+import { roleLabel } from '@/lib/roles';
 import { useAcknowledgeDiscrepancy } from '../api/acknowledge-discrepancy';
 import { commentInputSchema, useCommentOnDiscrepancy } from '../api/comment-discrepancy';
 import { useDiscrepancy } from '../api/get-discrepancy';
@@ -355,7 +356,8 @@ export function DiscrepancyDetail({ discrepancyId, projectId, onClose, canCommen
         {d.history.map((e) => (
           <li key={e.id} className={styles.item}>
             <Text block>
-              {e.actor ? `${e.actor.name} (${e.actor.role})` : 'Ligament'} {eventText(e.type, e.data)}
+              {e.actor ? `${e.actor.name} (${roleLabel(e.actor.role)})` : 'Ligament'}{' '}
+              {eventText(e.type, e.data)}
               {linkedRevision(e.data) !== undefined && (
                 <>
                   {' · revision '}

@@ -17,6 +17,7 @@ import {
 } from '@fluentui/react-components';
 import { useEffect, useState } from 'react';
 import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import type { Schema } from '@/lib/api-schemas';
 import type { DiscrepancyFilters } from '../api/get-discrepancies';
 import { StatusBadge } from './status-badge';
@@ -24,7 +25,6 @@ import { StatusBadge } from './status-badge';
 type Row = Schema<'DiscrepancyDto'>;
 
 const useStyles = makeStyles({
-  wrap: { overflowX: 'auto' },
   grid: { minWidth: '560px' },
   stack: {
     display: 'flex',
@@ -185,7 +185,7 @@ export function DiscrepancyGrid({
           : styles.badge;
 
   return (
-    <div className={styles.wrap}>
+    <HorizontalScroll label="Discrepancies, table">
       <DataGrid
         className={styles.grid}
         items={[...items]}
@@ -243,6 +243,6 @@ export function DiscrepancyGrid({
           )}
         </DataGridBody>
       </DataGrid>
-    </div>
+    </HorizontalScroll>
   );
 }

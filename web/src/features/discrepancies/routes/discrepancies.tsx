@@ -18,6 +18,7 @@ import {
   DismissRegular,
   DocumentBulletListRegular,
 } from '@fluentui/react-icons';
+import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
@@ -25,6 +26,7 @@ import { Section } from '@/components/section';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 import { useSession } from '@/lib/session';
 import { useDiscrepancies, type DiscrepancyFilters } from '../api/get-discrepancies';
+import { getDiscrepancyQueryOptions } from '../api/get-discrepancy';
 import { useDiscrepancyProjects } from '../api/get-discrepancy-projects';
 import { BulkMoveBar } from '../components/bulk-move-bar';
 import { DiscrepancyDetail } from '../components/discrepancy-detail';
@@ -57,7 +59,7 @@ const useStyles = makeStyles({
     flexWrap: 'wrap',
     marginTop: tokens.spacingVerticalM,
   },
-  pagerButtons: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
+  pagerButtons: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalS },
   picker: { maxWidth: '420px', marginBottom: tokens.spacingVerticalL },
 });
 
@@ -95,6 +97,14 @@ export function Component() {
   const projects = useDiscrepancyProjects();
   const [selected, setSelected] = useState<Set<number>>(new Set());
   const [activeId, setActiveId] = useState<number | null>(null);
+  const queryClient = useQueryClient();
+  /**
+   * Opens a discrepancy's details once they have loaded. A drawer that opens on a spinner has nothing
+   * to take focus; its focus trap then stays inactive and hides the drawer from screen readers and
+   * the keyboard, moves and all.
+   */
+  const openDetail = (id: number) =>
+    void queryClient.prefetchQuery(getDiscrepancyQueryOptions(id)).then(() => setActiveId(id));
   const wide = useWideLayout();
 
   const projectId = params.get('projectId') ? Number(params.get('projectId')) : projects.data?.[0]?.id;
@@ -236,7 +246,7 @@ export function Component() {
                 selected={selected}
                 onSelect={setSelected}
                 activeId={activeId}
-                onOpen={setActiveId}
+                onOpen={openDetail}
               />
               <nav className={styles.pager} aria-label="Pages">
                 <Text>

@@ -12,7 +12,7 @@ const useStyles = makeStyles({
     display: 'grid',
     gridTemplateColumns: 'minmax(260px, 2fr) minmax(0, 3fr)',
     gap: tokens.spacingHorizontalL,
-    '@media (max-width: 900px)': { gridTemplateColumns: '1fr' },
+    '@media (max-width: 900px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
   },
   list: {
     listStyleType: 'none',
@@ -38,6 +38,8 @@ const useStyles = makeStyles({
   active: { backgroundColor: tokens.colorBrandBackground2 },
   body: {
     whiteSpace: 'pre-wrap',
+    // Links in mail are long unbroken words: let them break rather than push the page sideways.
+    overflowWrap: 'anywhere',
     fontFamily: tokens.fontFamilyMonospace,
     fontSize: tokens.fontSizeBase200,
     margin: 0,

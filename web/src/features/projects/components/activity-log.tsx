@@ -5,6 +5,7 @@ import { Link } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/lib/format';
+import { roleLabel } from '@/lib/roles';
 import { EVENTS_PAGE_SIZE, useProjectEvents } from '../api/get-project-events';
 import { describeEvent } from './describe-event';
 
@@ -73,7 +74,7 @@ export function ActivityLog({ projectId }: ActivityLogProps) {
             </Text>
             <Text className={styles.meta}>
               {formatDateTime(e.at)}
-              {e.actor ? ` · ${e.actor.role}` : ''}
+              {e.actor ? ` · ${roleLabel(e.actor.role)}` : ''}
               {e.submittalId && (
                 <>
                   {' · '}

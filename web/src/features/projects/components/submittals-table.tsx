@@ -12,12 +12,12 @@ import {
 } from '@fluentui/react-components';
 import { ApprovalsAppRegular, ClockRegular } from '@fluentui/react-icons';
 import { Link } from 'react-router-dom';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import { paths } from '@/config/paths';
 import type { Schema } from '@/lib/api-schemas';
 import { formatDateTime } from '@/lib/format';
 
 const useStyles = makeStyles({
-  wrap: { overflowX: 'auto' },
   table: { tableLayout: 'auto' },
   badge: { whiteSpace: 'nowrap' },
   num: { textAlign: 'right', fontVariantNumeric: 'tabular-nums' },
@@ -40,7 +40,7 @@ export interface SubmittalsTableProps {
 export function SubmittalsTable({ submittals }: SubmittalsTableProps) {
   const styles = useStyles();
   return (
-    <div className={styles.wrap}>
+    <HorizontalScroll label="Submittals and revisions, table" minWidth="640px">
       <Table aria-label="Submittals and revisions" className={styles.table}>
         <TableHeader>
           <TableRow>
@@ -103,6 +103,6 @@ export function SubmittalsTable({ submittals }: SubmittalsTableProps) {
           ))}
         </TableBody>
       </Table>
-    </div>
+    </HorizontalScroll>
   );
 }

@@ -12,6 +12,7 @@ import {
 import { ArrowDownRegular, ArrowUpRegular, CheckmarkRegular, SubtractRegular } from '@fluentui/react-icons';
 import type { MemberClaims } from 'ligament/calc';
 import { quantityText, withinTolerance, type Dimension, type UnitSystem } from 'ligament/engine';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import { chainLabel } from '@/lib/units';
 
 const useStyles = makeStyles({
@@ -112,57 +113,59 @@ export function ClaimsComparison({ claims, recomputed, units, tolerance = 0.005 
 
   return (
     <div>
-      <Table size="small" aria-label="Claimed against recomputed" className={styles.table}>
-        <TableHeader>
-          <TableRow>
-            <TableHeaderCell>Quantity</TableHeaderCell>
-            <TableHeaderCell className={styles.num}>Claimed</TableHeaderCell>
-            <TableHeaderCell className={styles.num}>Recomputed</TableHeaderCell>
-            <TableHeaderCell>Difference</TableHeaderCell>
-          </TableRow>
-        </TableHeader>
-        <TableBody>
-          {rows.map(({ key, label, kind }) => {
-            const claimed = claims?.[key];
-            const value = recomputed[key];
-            if (value === undefined) return null;
-            const v = verdict(claimed, value, kind, tolerance);
-            return (
-              <TableRow key={key} className={v === 'over' ? styles.diffRow : undefined}>
-                <TableCell>
-                  {label}
-                  {key === 'available' && recomputed.governs ? `, ${recomputed.governs}` : ''}
-                </TableCell>
-                <TableCell className={styles.num}>{quantityText(claimed, kind, units)}</TableCell>
-                <TableCell className={styles.num}>{quantityText(value, kind, units)}</TableCell>
-                <TableCell>{mark(v, claimed, value)}</TableCell>
-              </TableRow>
-            );
-          })}
-          <TableRow className={chainSame === false ? styles.diffRow : undefined}>
-            <TableCell>Controlling chain</TableCell>
-            <TableCell className={styles.num}>{claimedChain ? chainLabel(claimedChain) : '—'}</TableCell>
-            <TableCell className={styles.num}>
-              {recomputed.controllingChain ? chainLabel(recomputed.controllingChain) : 'none can form'}
-            </TableCell>
-            <TableCell>
-              {chainSame === undefined ? (
-                <span className={`${styles.mark} ${styles.none}`}>
-                  <SubtractRegular aria-hidden /> not claimed
-                </span>
-              ) : chainSame ? (
-                <span className={`${styles.mark} ${styles.same}`}>
-                  <CheckmarkRegular aria-hidden /> agrees
-                </span>
-              ) : (
-                <span className={`${styles.mark} ${styles.over}`}>
-                  <ArrowUpRegular aria-hidden /> differs
-                </span>
-              )}
-            </TableCell>
-          </TableRow>
-        </TableBody>
-      </Table>
+      <HorizontalScroll label="Claimed against recomputed, table" minWidth="520px">
+        <Table size="small" aria-label="Claimed against recomputed" className={styles.table}>
+          <TableHeader>
+            <TableRow>
+              <TableHeaderCell>Quantity</TableHeaderCell>
+              <TableHeaderCell className={styles.num}>Claimed</TableHeaderCell>
+              <TableHeaderCell className={styles.num}>Recomputed</TableHeaderCell>
+              <TableHeaderCell>Difference</TableHeaderCell>
+            </TableRow>
+          </TableHeader>
+          <TableBody>
+            {rows.map(({ key, label, kind }) => {
+              const claimed = claims?.[key];
+              const value = recomputed[key];
+              if (value === undefined) return null;
+              const v = verdict(claimed, value, kind, tolerance);
+              return (
+                <TableRow key={key} className={v === 'over' ? styles.diffRow : undefined}>
+                  <TableCell>
+                    {label}
+                    {key === 'available' && recomputed.governs ? `, ${recomputed.governs}` : ''}
+                  </TableCell>
+                  <TableCell className={styles.num}>{quantityText(claimed, kind, units)}</TableCell>
+                  <TableCell className={styles.num}>{quantityText(value, kind, units)}</TableCell>
+                  <TableCell>{mark(v, claimed, value)}</TableCell>
+                </TableRow>
+              );
+            })}
+            <TableRow className={chainSame === false ? styles.diffRow : undefined}>
+              <TableCell>Controlling chain</TableCell>
+              <TableCell className={styles.num}>{claimedChain ? chainLabel(claimedChain) : '—'}</TableCell>
+              <TableCell className={styles.num}>
+                {recomputed.controllingChain ? chainLabel(recomputed.controllingChain) : 'none can form'}
+              </TableCell>
+              <TableCell>
+                {chainSame === undefined ? (
+                  <span className={`${styles.mark} ${styles.none}`}>
+                    <SubtractRegular aria-hidden /> not claimed
+                  </span>
+                ) : chainSame ? (
+                  <span className={`${styles.mark} ${styles.same}`}>
+                    <CheckmarkRegular aria-hidden /> agrees
+                  </span>
+                ) : (
+                  <span className={`${styles.mark} ${styles.over}`}>
+                    <ArrowUpRegular aria-hidden /> differs
+                  </span>
+                )}
+              </TableCell>
+            </TableRow>
+          </TableBody>
+        </Table>
+      </HorizontalScroll>
       <Text size={200}>
         Values within {(tolerance * 100).toFixed(1)} % of the recomputation are taken to agree.
       </Text>

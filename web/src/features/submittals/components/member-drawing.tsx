@@ -1,6 +1,6 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import type { Drawing, Point, Shape, StrokeName, TextShape } from 'ligament/draw';
-import { arrowHead, slotPath, STROKES } from 'ligament/draw';
+import { arrowHead, chainPoints, slotPath, STROKES } from 'ligament/draw';
 import { chainKey } from '@/lib/units';
 
 const useStyles = makeStyles({
@@ -27,6 +27,7 @@ const strokeColour: Record<StrokeName, string> = {
   load: tokens.colorNeutralForeground1,
   'fracture-minus': tokens.colorPaletteRedForeground1,
   'fracture-plus': tokens.colorPaletteBlueForeground2,
+  claimed: tokens.colorPaletteGrapeForeground2,
   leader: tokens.colorNeutralForeground2,
 };
 
@@ -50,12 +51,16 @@ function strokeProps(name: StrokeName, widthFactor = 1) {
 
 const pts = (points: readonly Point[]) => points.map(([x, y]) => `${x},${y}`).join(' ');
 
-function TextEl({ t, colour }: { t: TextShape; colour?: string }) {
+/**
+ * `minSize`: the least font size in sheet millimetres, so that no label is smaller on screen than
+ * the viewer allows at its zoom (a label keeps its anchor and grows away from it).
+ */
+function TextEl({ t, colour, minSize = 0 }: { t: TextShape; colour?: string; minSize?: number }) {
   return (
     <text
       x={t.at[0]}
       y={t.at[1]}
-      fontSize={t.size}
+      fontSize={Math.max(t.size, minSize)}
       textAnchor={t.anchor}
       fill={colour ?? textColour(t)}
       fontWeight={t.weight === 'bold' ? 600 : undefined}
@@ -79,6 +84,10 @@ export interface MemberDrawingProps {
   readonly chains: readonly DrawnChain[];
   /** chainKey(direction, holes) of the chain to highlight, or null. */
   readonly highlighted: string | null;
+  /** The part of the sheet to show (sheet mm); the whole sheet by default. */
+  readonly viewBox?: string;
+  /** The least font size, sheet mm (the viewer's on-screen minimum at its zoom). */
+  readonly minTextSize?: number;
 }
 
 /**
@@ -86,29 +95,17 @@ export interface MemberDrawingProps {
  * scale, holes and slots, gauge and pitch dimensions, load arrows and the governing fracture line
  * of each direction. The chain highlighted in the table is drawn over it, edge to holes to edge.
  */
-export function MemberDrawing({ drawing, chains, highlighted }: MemberDrawingProps) {
+export function MemberDrawing({
+  drawing,
+  chains,
+  highlighted,
+  viewBox,
+  minTextSize = 0,
+}: MemberDrawingProps) {
   const styles = useStyles();
-  const holeCentres = new Map<string, Point>();
-  let top = Infinity;
-  let bottom = -Infinity;
-  for (const s of drawing.shapes) {
-    if (s.kind === 'circle' || s.kind === 'slot') holeCentres.set(s.holeId, s.centre);
-    if (s.kind === 'polyline' && s.stroke === 'outline') {
-      for (const [, y] of s.points) {
-        top = Math.min(top, y);
-        bottom = Math.max(bottom, y);
-      }
-    }
-  }
   const lit = chains.find((c) => chainKey(c.direction, c.holes) === highlighted);
   const litHoles = new Set(lit?.holes ?? []);
-  let litPoints: Point[] | null = null;
-  if (lit && lit.holes.length > 0 && Number.isFinite(top)) {
-    const centres = lit.holes.map((id) => holeCentres.get(id)).filter((p): p is Point => p !== undefined);
-    const first = centres[0];
-    const last = centres[centres.length - 1];
-    if (first && last) litPoints = [[first[0], bottom], ...centres, [last[0], top]];
-  }
+  const litPoints = lit && lit.holes.length > 0 ? chainPoints(drawing, lit.holes) : null;
 
   const render = (s: Shape, index: number) => {
     switch (s.kind) {
@@ -197,7 +194,7 @@ export function MemberDrawing({ drawing, chains, highlighted }: MemberDrawingPro
                 {...strokeProps('tick')}
               />
             ))}
-            <TextEl t={s.label} />
+            <TextEl t={s.label} minSize={minTextSize} />
           </g>
         );
       case 'arrow':
@@ -226,18 +223,42 @@ export function MemberDrawing({ drawing, chains, highlighted }: MemberDrawingPro
               y2={s.leader.to[1]}
               {...strokeProps('leader')}
             />
-            <TextEl t={s.label} colour={strokeColour[s.stroke]} />
+            <TextEl t={s.label} colour={strokeColour[s.stroke]} minSize={minTextSize} />
+          </g>
+        );
+      case 'claimed-chain':
+        return (
+          <g
+            key={index}
+            data-claimed-chain={s.holes.join(' ')}
+            data-direction={s.direction}
+            opacity={lit ? 0.35 : 1}
+          >
+            {s.points.length > 1 && <polyline points={pts(s.points)} {...strokeProps(s.stroke)} />}
+            {s.markers.map((m, i) => (
+              <polygon key={i} points={pts(m)} {...strokeProps(s.stroke)} />
+            ))}
+            {s.leader && (
+              <line
+                x1={s.leader.from[0]}
+                y1={s.leader.from[1]}
+                x2={s.leader.to[0]}
+                y2={s.leader.to[1]}
+                {...strokeProps('leader')}
+              />
+            )}
+            <TextEl t={s.label} colour={strokeColour[s.stroke]} minSize={minTextSize} />
           </g>
         );
       case 'text':
-        return <TextEl key={index} t={s} />;
+        return <TextEl key={index} t={s} minSize={minTextSize} />;
     }
   };
 
   return (
     <svg
       className={styles.svg}
-      viewBox={`0 0 ${drawing.width} ${drawing.height}`}
+      viewBox={viewBox ?? `0 0 ${drawing.width} ${drawing.height}`}
       role="img"
       aria-label={drawing.title}
       fontFamily={tokens.fontFamilyBase}

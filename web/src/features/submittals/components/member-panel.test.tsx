@@ -41,6 +41,19 @@ describe('MemberPanel', () => {
     expect(drawing.querySelector('[data-fracture]')?.getAttribute('data-chain')).toBe('A1 B1 A2');
   });
 
+  it('draws the claimed controlling chain beside the governing one, and the legend names both', () => {
+    const { document, member, result } = splicePlate();
+    renderWithProviders(<MemberPanel document={document} member={member} result={result} findings={[]} />);
+    const drawing = screen.getByTestId('member-drawing');
+    const claimed = drawing.querySelector('[data-claimed-chain]');
+    expect(claimed?.getAttribute('data-claimed-chain')).toBe('A1 A2');
+    expect(claimed?.querySelectorAll('polygon')).toHaveLength(2);
+    expect(within(drawing as unknown as HTMLElement).getByText(/^claimed.*: A1–A2/)).toBeInTheDocument();
+    const legend = screen.getByRole('list', { name: 'Lines on the drawing' });
+    expect(within(legend).getByText(/Governing fracture line, load from −x/)).toBeInTheDocument();
+    expect(within(legend).getByText(/Chain the calc file claims controls/)).toBeInTheDocument();
+  });
+
   it('hovering a chain row traces that chain on the drawing, and leaving clears it', () => {
     const { document, member, result } = splicePlate();
     renderWithProviders(<MemberPanel document={document} member={member} result={result} findings={[]} />);

@@ -1,24 +1,21 @@
 import { makeStyles, Subtitle2, Text, tokens } from '@fluentui/react-components';
 import type { CalcDocument, CalcMember } from 'ligament/calc';
-import { buildDrawing } from 'ligament/draw';
+import { buildDrawing, withClaimedChain } from 'ligament/draw';
 import { codeLabel, type MemberResult } from 'ligament/engine';
 import { useMemo, useState } from 'react';
 import { ClassBadge, SeverityBadge } from '@/components/finding-badges';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import { EmptyState } from '@/components/states';
 import { CAUTION } from 'ligament/engine';
 import type { Schema } from '@/lib/api-schemas';
 import { ChainsTable } from './chains-table';
 import { ClaimsComparison } from './claims-comparison';
-import { MemberDrawing, type DrawnChain } from './member-drawing';
+import { DrawingViewer } from './drawing-viewer';
+import type { DrawnChain } from './member-drawing';
 
 const useStyles = makeStyles({
-  top: {
-    display: 'grid',
-    gridTemplateColumns: 'minmax(0, 1fr) minmax(0, 1fr)',
-    gap: tokens.spacingHorizontalL,
-    alignItems: 'start',
-    '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
-  },
+  // The drawing takes the panel's width, so its labels can be read without zooming in.
+  top: { display: 'flex', flexDirection: 'column', gap: 0 },
   block: {
     display: 'flex',
     flexDirection: 'column',
@@ -26,7 +23,6 @@ const useStyles = makeStyles({
     minWidth: 0,
     marginTop: tokens.spacingVerticalL,
   },
-  tableWrap: { overflowX: 'auto' },
   findings: {
     listStyleType: 'none',
     margin: 0,
@@ -43,6 +39,7 @@ const useStyles = makeStyles({
     flexDirection: 'column',
     gap: tokens.spacingVerticalXS,
   },
+  legend: { color: tokens.colorNeutralForeground2 },
   findingHead: { display: 'flex', gap: tokens.spacingHorizontalS, alignItems: 'center', flexWrap: 'wrap' },
   code: { fontFamily: tokens.fontFamilyMonospace, fontWeight: tokens.fontWeightSemibold },
   pointer: {
@@ -50,8 +47,20 @@ const useStyles = makeStyles({
     color: tokens.colorNeutralForeground3,
     fontSize: tokens.fontSizeBase200,
   },
-  legend: { color: tokens.colorNeutralForeground2 },
 });
+
+/**
+ * The chain the file claims controls: its controllingChain, or else the claimed chain with the least
+ * claimed net width; none when the file claims no chain.
+ */
+export function claimedControllingChain(claims: CalcMember['claims']) {
+  if (claims?.controllingChain) return claims.controllingChain;
+  const withWidth = (claims?.chains ?? []).filter((c) => c.netWidth !== undefined);
+  return withWidth.reduce<(typeof withWidth)[number] | undefined>(
+    (least, c) => (!least || (c.netWidth ?? Infinity) < (least.netWidth ?? Infinity) ? c : least),
+    undefined,
+  );
+}
 
 export interface MemberPanelProps {
   readonly document: CalcDocument;
@@ -65,16 +74,16 @@ export function MemberPanel({ document, member, result, findings }: MemberPanelP
   const styles = useStyles();
   const [highlighted, setHighlighted] = useState<string | null>(null);
   const units = document.profile.units;
-  const drawing = useMemo(
-    () =>
-      buildDrawing(member.input, result, {
-        units,
-        profile: document.profile,
-        project: document.meta.project,
-        caution: CAUTION,
-      }),
-    [member, result, units, document],
-  );
+  const drawing = useMemo(() => {
+    const sheet = buildDrawing(member.input, result, {
+      units,
+      profile: document.profile,
+      project: document.meta.project,
+      caution: CAUTION,
+    });
+    const claimed = claimedControllingChain(member.claims);
+    return claimed ? withClaimedChain(sheet, claimed) : sheet;
+  }, [member, result, units, document]);
   const chains: DrawnChain[] = result.directions.flatMap((d) =>
     d.leastChains.map((c) => ({ direction: d.direction, holes: c.holes })),
   );
@@ -85,12 +94,13 @@ export function MemberPanel({ document, member, result, findings }: MemberPanelP
     <div>
       <div className={styles.top}>
         <div className={styles.block}>
-          <Subtitle2 as="h3">Drawing, scale 1:{drawing.scale}</Subtitle2>
-          <MemberDrawing drawing={drawing} chains={chains} highlighted={highlighted} />
+          <Subtitle2 as="h3">
+            Drawing, scale 1:{drawing.scale}, dimensions in {units === 'in' ? 'inches' : 'millimetres'}
+          </Subtitle2>
+          <DrawingViewer drawing={drawing} chains={chains} highlighted={highlighted} />
           <Text size={200} className={styles.legend}>
-            Dashed lines are the governing fracture line for each load direction (labelled −x or +x with the
-            net width). Hover or focus a chain in the tables below to trace it on the plate. Dimensions in{' '}
-            {units === 'in' ? 'inches' : 'millimetres'}. Checked to {codeLabel(document.profile)}.
+            Hover or focus a chain in the tables below to trace it on the plate. Checked to{' '}
+            {codeLabel(document.profile)}.
           </Text>
         </div>
         <div className={styles.block}>
@@ -121,7 +131,7 @@ export function MemberPanel({ document, member, result, findings }: MemberPanelP
           {d.leastChains.length === 0 ? (
             <Text>No chain can form under the full load from this direction.</Text>
           ) : (
-            <div className={styles.tableWrap}>
+            <HorizontalScroll label={`Least chains, load from ${d.direction}, table`} minWidth="560px">
               <ChainsTable
                 direction={d.direction}
                 chains={d.leastChains}
@@ -130,7 +140,7 @@ export function MemberPanel({ document, member, result, findings }: MemberPanelP
                 highlighted={highlighted}
                 onHighlight={setHighlighted}
               />
-            </div>
+            </HorizontalScroll>
           )}
         </div>
       ))}

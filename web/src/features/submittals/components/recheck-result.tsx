@@ -14,6 +14,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { quantityText } from 'ligament/engine';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import type { Schema } from '@/lib/api-schemas';
 import { plural } from '@/lib/format';
 
@@ -22,7 +23,6 @@ type RecheckFinding = Schema<'RecheckFindingDto'>;
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
-  wrap: { overflowX: 'auto' },
   num: { textAlign: 'right', fontVariantNumeric: 'tabular-nums' },
   code: { fontFamily: tokens.fontFamilyMonospace, fontWeight: tokens.fontWeightSemibold },
   pre: {
@@ -36,7 +36,7 @@ const useStyles = makeStyles({
 function FindingTable({ label, findings }: { label: string; findings: readonly RecheckFinding[] }) {
   const styles = useStyles();
   return (
-    <div className={styles.wrap}>
+    <HorizontalScroll label={`${label}, table`} minWidth="560px">
       <Table size="small" aria-label={label}>
         <TableHeader>
           <TableRow>
@@ -59,7 +59,7 @@ function FindingTable({ label, findings }: { label: string; findings: readonly R
           ))}
         </TableBody>
       </Table>
-    </div>
+    </HorizontalScroll>
   );
 }
 
@@ -98,7 +98,7 @@ export function RecheckResult({ result }: RecheckResultProps) {
       {result.valueChanges.length > 0 && (
         <>
           <Subtitle2 as="h3">Values that changed</Subtitle2>
-          <div className={styles.wrap}>
+          <HorizontalScroll label="Values that changed, table" minWidth="480px">
             <Table size="small" aria-label="Values that changed">
               <TableHeader>
                 <TableRow>
@@ -125,7 +125,7 @@ export function RecheckResult({ result }: RecheckResultProps) {
                 ))}
               </TableBody>
             </Table>
-          </div>
+          </HorizontalScroll>
         </>
       )}
       {result.newFindings.length > 0 && (

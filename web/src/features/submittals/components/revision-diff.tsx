@@ -1,11 +1,13 @@
-import { makeStyles, Subtitle2, Text, tokens } from '@fluentui/react-components';
+import { makeStyles, Subtitle1, Subtitle2, Text, tokens } from '@fluentui/react-components';
 import { SeverityBadge } from '@/components/finding-badges';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 import type { Schema } from '@/lib/api-schemas';
 import { useRevisionDiff } from '../api/get-revision-diff';
 import { CalcDiffView } from './calc-diff-view';
+import { MeaningDiffView } from './meaning-diff-view';
 
 const useStyles = makeStyles({
+  heading: { display: 'block', marginBottom: tokens.spacingVerticalM },
   block: {
     display: 'flex',
     flexDirection: 'column',
@@ -18,6 +20,15 @@ const useStyles = makeStyles({
     gap: tokens.spacingHorizontalL,
     '@media (max-width: 900px)': { gridTemplateColumns: '1fr' },
   },
+  // By meaning beside the text on a wide screen, above it on a narrow one.
+  sides: {
+    display: 'grid',
+    gridTemplateColumns: 'minmax(0, 2fr) minmax(0, 3fr)',
+    gap: tokens.spacingHorizontalL,
+    alignItems: 'start',
+    '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
+  },
+  side: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS, minWidth: 0 },
   list: {
     margin: 0,
     paddingLeft: tokens.spacingHorizontalL,
@@ -48,6 +59,9 @@ export function RevisionDiff({ submittalId }: RevisionDiffProps) {
   const d = diff.data;
   return (
     <div>
+      <Subtitle1 as="h2" className={styles.heading}>
+        Changes from submittal #{d.previousSubmittalId}
+      </Subtitle1>
       <div className={styles.columns}>
         <div className={styles.block}>
           <Subtitle2 as="h3">Closed ({d.closed.length})</Subtitle2>
@@ -98,7 +112,23 @@ export function RevisionDiff({ submittalId }: RevisionDiffProps) {
                 : ''}
             </Subtitle2>
             {f.patch ? (
-              <CalcDiffView patch={f.patch} label={`Changes in ${f.currentFile ?? f.previousFile}`} />
+              <div className={styles.sides}>
+                <section className={styles.side} aria-labelledby={`meaning-${i}`}>
+                  <Subtitle2 as="h4" id={`meaning-${i}`}>
+                    By meaning
+                  </Subtitle2>
+                  <MeaningDiffView
+                    changes={f.changes}
+                    label={`Changes by meaning in ${f.currentFile ?? f.previousFile}`}
+                  />
+                </section>
+                <section className={styles.side} aria-labelledby={`text-${i}`}>
+                  <Subtitle2 as="h4" id={`text-${i}`}>
+                    As text
+                  </Subtitle2>
+                  <CalcDiffView patch={f.patch} label={`Changes in ${f.currentFile ?? f.previousFile}`} />
+                </section>
+              </div>
             ) : (
               <Text>No change.</Text>
             )}

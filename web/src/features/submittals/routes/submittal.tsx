@@ -7,12 +7,14 @@ import {
   MessageBarTitle,
   Tab,
   TabList,
+  Subtitle1,
   Text,
   tokens,
 } from '@fluentui/react-components';
 import { ArrowSyncRegular, DocumentBulletListRegular, PrintRegular } from '@fluentui/react-icons';
 import { useState } from 'react';
 import { useNavigate, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { HorizontalScroll } from '@/components/horizontal-scroll';
 import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
@@ -34,8 +36,10 @@ import { RevisionDiff } from '../components/revision-diff';
 import { StampDialog } from '../components/stamp-dialog';
 
 const useStyles = makeStyles({
-  tabs: { marginBottom: tokens.spacingVerticalM, overflowX: 'auto' },
-  memberTabs: { marginBottom: tokens.spacingVerticalS, overflowX: 'auto' },
+  tabs: { marginBottom: tokens.spacingVerticalM },
+  memberTabs: { marginBottom: tokens.spacingVerticalS },
+  // Tabs keep their names on one line; a row wider than the screen scrolls with a cue (HorizontalScroll).
+  tabList: { flexWrap: 'nowrap', width: 'max-content', '& .fui-Tab': { whiteSpace: 'nowrap' } },
   meta: {
     display: 'flex',
     gap: tokens.spacingHorizontalL,
@@ -81,23 +85,25 @@ function FileMembers({
   return (
     <>
       {members.length > 1 && (
-        <TabList
-          className={styles.memberTabs}
-          size="small"
-          selectedValue={String(memberIndex)}
-          onTabSelect={(_, d) => setMemberIndex(Number(d.value))}
-          aria-label="Members in this file"
-        >
-          {members.map((m, i) => (
-            <Tab key={m.input.id} value={String(i)}>
-              {m.input.id}
-            </Tab>
-          ))}
-        </TabList>
+        <HorizontalScroll label="Members in this file" buttons className={styles.memberTabs}>
+          <TabList
+            className={styles.tabList}
+            size="small"
+            selectedValue={String(memberIndex)}
+            onTabSelect={(_, d) => setMemberIndex(Number(d.value))}
+            aria-label="Members in this file"
+          >
+            {members.map((m, i) => (
+              <Tab key={m.input.id} value={String(i)}>
+                {m.input.id}
+              </Tab>
+            ))}
+          </TabList>
+        </HorizontalScroll>
       )}
-      <Text weight="semibold" size={400}>
+      <Subtitle1 as="h2">
         {member.input.id} — {member.description ?? member.input.kind}
-      </Text>
+      </Subtitle1>
       {result ? (
         <MemberPanel
           document={file.data.document}
@@ -229,19 +235,21 @@ export function Component() {
           <EmptyState title="No files in this submittal" />
         ) : (
           <>
-            <TabList
-              className={styles.tabs}
-              selectedValue={selected}
-              onTabSelect={(_, d) => setTab(String(d.value))}
-              aria-label="Calc files"
-            >
-              {files.data.map((f) => (
-                <Tab key={f.id} value={`file-${f.id}`}>
-                  {f.fileName} ({f.memberIds.length})
-                </Tab>
-              ))}
-              {s.revisionOfId && <Tab value="diff">Changes from #{s.revisionOfId}</Tab>}
-            </TabList>
+            <HorizontalScroll label="Calc files" buttons className={styles.tabs}>
+              <TabList
+                className={styles.tabList}
+                selectedValue={selected}
+                onTabSelect={(_, d) => setTab(String(d.value))}
+                aria-label="Calc files"
+              >
+                {files.data.map((f) => (
+                  <Tab key={f.id} value={`file-${f.id}`}>
+                    {f.fileName} ({f.memberIds.length})
+                  </Tab>
+                ))}
+                {s.revisionOfId && <Tab value="diff">Changes from #{s.revisionOfId}</Tab>}
+              </TabList>
+            </HorizontalScroll>
             {selected === 'diff' ? (
               <RevisionDiff submittalId={s.id} />
             ) : (
