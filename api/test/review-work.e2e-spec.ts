@@ -82,6 +82,35 @@ describe('reopening', () => {
   });
 });
 
+describe('a change made on what someone saw', () => {
+  it('is refused with the state that won when the item changed since it was read', async () => {
+    const id = await fresh('VS1');
+    const seen = (await request(t.http).get(`/api/discrepancies/${id}`).set(bearer(tok.checker))).body;
+    expect(seen.version).toBe(0);
+    await move('consultant', id, { to: 'answered', note: 'Meanwhile.', version: 0 }).expect(200);
+    const stale = await move('checker', id, { to: 'waived', note: 'Old view.', version: seen.version });
+    expect(stale.status).toBe(409);
+    expect(stale.body.message).toBe(
+      `Someone else changed discrepancy #${id} first: it is now Answered. Your move to Waived was not made.`,
+    );
+    expect(stale.body.details).toEqual([expect.objectContaining({ id, status: 'answered', version: 1 })]);
+    const assign = await request(t.http)
+      .patch(`/api/discrepancies/${id}/assignment`)
+      .set(bearer(tok.checker))
+      .send({ dueDate: '2026-12-18', version: 0 });
+    expect(assign.status).toBe(409);
+    expect((await move('checker', id, { to: 'accepted', version: 1 })).status).toBe(200);
+  });
+
+  it('a move the status does not allow says so, with the status it has', async () => {
+    const id = await fresh('VS2');
+    await move('checker', id, { to: 'waived', note: 'Done.' }).expect(200);
+    const again = await move('checker', id, { to: 'waived', note: 'Again.' });
+    expect(again.status).toBe(409);
+    expect(again.body.details).toEqual([expect.objectContaining({ id, status: 'waived' })]);
+  });
+});
+
 describe('assignee and due date', () => {
   it('the checker sets, changes and clears them; each change is an event', async () => {
     const id = await fresh('AS1');

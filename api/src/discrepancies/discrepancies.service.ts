@@ -80,6 +80,7 @@ const ITEM_JSON = `json_object(${[
     'message',
     'pointer',
     'status',
+    'version',
   ].map(
     (c) =>
       `'${c}', ${c === 'chain' ? CHAIN_JSON : c === 'claimed' || c === 'recomputed' ? exactNumber(c) : c}`,
@@ -426,7 +427,15 @@ export class DiscrepanciesService {
    */
   async move(id: number, dto: TransitionDto, actor: AuthUser): Promise<DiscrepancyDetailDto> {
     const d = await this.find(id);
+    // The mover saw an older version: say so before judging the move against a status they never saw.
+    if (dto.version !== undefined && dto.version !== d.version)
+      throw changedMeanwhile(id, d, `Your move to ${statusWord(dto.to)} was not made.`);
     const refused = refusal(d, dto, actor.role);
+    if (refused?.status === 409)
+      throw new ConflictException({
+        message: refused.message,
+        details: [{ id, status: d.status, version: d.version, message: refused.message }],
+      });
     if (refused) throwRefusal(refused);
     const move = STATUS_MOVES.find(
       (m) => m.to === dto.to && m.role === actor.role && m.from.includes(d.status),
@@ -531,6 +540,8 @@ export class DiscrepanciesService {
       throw new ConflictException(
         `This discrepancy was superseded by submittal #${d.supersededBySubmittalId}; assign its current item instead.`,
       );
+    if (dto.version !== undefined && dto.version !== d.version)
+      throw changedMeanwhile(id, d, 'Your assignment was not saved; look at it again.');
     const assigneeId = dto.assigneeId === undefined ? d.assigneeId : dto.assigneeId;
     const dueDate = dto.dueDate === undefined ? d.dueDate : dto.dueDate;
     let assignee: Recipient | null = null;
@@ -879,6 +890,7 @@ export class DiscrepanciesService {
       message: d.message,
       pointer: d.pointer,
       status: d.status,
+      version: d.version,
       acknowledgedAt: d.acknowledgedAt ? new Date(d.acknowledgedAt).toISOString() : null,
       current: d.supersededBySubmittalId === null,
       supersededBySubmittalId: d.supersededBySubmittalId,

@@ -1331,6 +1331,8 @@ export interface components {
       pointer: string;
       /** @enum {string} */
       status: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived' | 'resolved';
+      /** @description Raised by every change; send it back with a move or an assignment to be told if someone else changed it first */
+      version: number;
       /** Format: date-time */
       acknowledgedAt: string | null;
       /** @description Not superseded: no later revision has re-checked it */
@@ -1433,6 +1435,8 @@ export interface components {
       pointer: string;
       /** @enum {string} */
       status: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived' | 'resolved';
+      /** @description Raised by every change; send it back with a move or an assignment to be told if someone else changed it first */
+      version: number;
       /** Format: date-time */
       acknowledgedAt: string | null;
       /** @description Not superseded: no later revision has re-checked it */
@@ -1489,6 +1493,8 @@ export interface components {
       note?: string;
       /** @description answered: the submittal that revises this discrepancy’s submittal */
       revisionSubmittalId?: number;
+      /** @description The version the mover saw; when the item has changed since, 409 with its current status */
+      version?: number;
     };
     AssignDto: {
       /** @description A consultant or checker of the project; null to clear; absent to keep */
@@ -1499,6 +1505,8 @@ export interface components {
        * @example 2026-12-18
        */
       dueDate?: string | null;
+      /** @description The version the checker saw; when the item has changed since, 409 with its current status */
+      version?: number;
     };
     CreateCommentDto: {
       body: string;

@@ -125,6 +125,11 @@ export class DiscrepancyDto {
   @ApiProperty() message: string;
   @ApiProperty({ description: 'JSON pointer into the calc file' }) pointer: string;
   @ApiProperty({ enum: DISCREPANCY_STATUSES }) status: DiscrepancyStatus;
+  @ApiProperty({
+    description:
+      'Raised by every change; send it back with a move or an assignment to be told if someone else changed it first',
+  })
+  version: number;
   @ApiProperty({ format: 'date-time', nullable: true, type: String }) acknowledgedAt: string | null;
   @ApiProperty({ description: 'Not superseded: no later revision has re-checked it' }) current: boolean;
   @ApiProperty({
@@ -240,6 +245,13 @@ export class AssignDto {
   @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'dueDate must be a day written YYYY-MM-DD' })
   @IsISO8601({ strict: true }, { message: 'dueDate must be a day of the calendar' })
   dueDate?: string | null;
+  @ApiPropertyOptional({
+    description: 'The version the checker saw; when the item has changed since, 409 with its current status',
+  })
+  @IsOptional()
+  @IsInt()
+  @Min(0)
+  version?: number;
 }
 
 export class TransitionDto {
@@ -261,6 +273,13 @@ export class TransitionDto {
   @IsInt()
   @Min(1)
   revisionSubmittalId?: number;
+  @ApiPropertyOptional({
+    description: 'The version the mover saw; when the item has changed since, 409 with its current status',
+  })
+  @IsOptional()
+  @IsInt()
+  @Min(0)
+  version?: number;
 }
 
 export class BulkTransitionDto {
