@@ -1,6 +1,8 @@
 import {
   Button,
   DrawerBody,
+  DrawerHeader,
+  DrawerHeaderTitle,
   Dropdown,
   Field,
   makeStyles,
@@ -10,15 +12,23 @@ import {
   Text,
   tokens,
 } from '@fluentui/react-components';
-import { ChevronLeftRegular, ChevronRightRegular, DocumentBulletListRegular } from '@fluentui/react-icons';
+import {
+  ArrowDownloadRegular,
+  ChevronLeftRegular,
+  ChevronRightRegular,
+  DismissRegular,
+  DocumentBulletListRegular,
+} from '@fluentui/react-icons';
 import { useEffect, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 import { useSession } from '@/lib/session';
+import { useDownloadDiscrepanciesCsv } from '../api/download-discrepancies-csv';
 import { useDiscrepancies, type DiscrepancyFilters } from '../api/get-discrepancies';
 import { useDiscrepancyProjects } from '../api/get-discrepancy-projects';
+import { useProjectSubmittals } from '../api/get-revision-candidates';
 import { BulkMoveBar } from '../components/bulk-move-bar';
 import { DiscrepancyDetail } from '../components/discrepancy-detail';
 import { DiscrepancyFilters as FiltersBar, type FilterValues } from '../components/discrepancy-filters';
@@ -52,6 +62,14 @@ const useStyles = makeStyles({
   },
   pagerButtons: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
   picker: { maxWidth: '420px', marginBottom: tokens.spacingVerticalL },
+  listTools: {
+    display: 'flex',
+    justifyContent: 'space-between',
+    alignItems: 'center',
+    flexWrap: 'wrap',
+    gap: tokens.spacingHorizontalS,
+    marginBottom: tokens.spacingVerticalS,
+  },
 });
 
 const SORTS: readonly DiscrepancyFilters['sort'][] = [
@@ -64,6 +82,8 @@ const SORTS: readonly DiscrepancyFilters['sort'][] = [
   'memberId',
   'code',
   'fileName',
+  'submittalId',
+  'dueDate',
 ];
 /** Wide enough for the grid and the detail side by side; narrower, the detail opens as a drawer over the grid. */
 const WIDE_QUERY = '(min-width: 1400px)';
@@ -99,21 +119,29 @@ export function Component() {
     severity: list(params.get('severity')),
     memberId: params.get('memberId') ?? '',
     code: params.get('code') ?? '',
+    q: params.get('q') ?? '',
+    includeSuperseded: params.get('includeSuperseded') === 'true',
     sort: sortParam && SORTS.includes(sortParam) ? sortParam : 'severity',
     order: params.get('order') === 'desc' ? 'desc' : 'asc',
     page: Math.max(1, Number(params.get('page') ?? 1) || 1),
     pageSize: [25, 50, 100].includes(Number(params.get('pageSize'))) ? Number(params.get('pageSize')) : 25,
   };
   const discrepancies = useDiscrepancies(projectId, filters);
+  const submittals = useProjectSubmittals(projectId);
+  const csv = useDownloadDiscrepanciesCsv(projectId, filters);
 
   const update = (
-    next: Record<string, string | readonly string[] | number | undefined>,
+    next: Record<string, string | readonly string[] | number | boolean | undefined>,
     resetPage = true,
   ) => {
     const p = new URLSearchParams(params);
     if (projectId !== undefined) p.set('projectId', String(projectId));
     for (const [key, value] of Object.entries(next)) {
-      const text = Array.isArray(value) ? value.join(',') : value === undefined ? '' : String(value);
+      const text = Array.isArray(value)
+        ? value.join(',')
+        : value === undefined || value === false
+          ? ''
+          : String(value);
       if (text === '' && key !== 'status') p.delete(key);
       else p.set(key, text);
     }
@@ -123,6 +151,9 @@ export function Component() {
   };
 
   const filterValues: FilterValues = {
+    q: filters.q ?? '',
+    submittalId: filters.submittalId,
+    includeSuperseded: filters.includeSuperseded ?? false,
     status: filters.status ?? [],
     class: filters.class ?? [],
     severity: filters.severity ?? [],
@@ -132,6 +163,9 @@ export function Component() {
   const total = discrepancies.data?.total ?? 0;
   const pages = Math.max(1, Math.ceil(total / filters.pageSize));
   const project = projects.data?.find((p) => p.id === projectId);
+  const submittalTitles = new Map((submittals.data ?? []).map((s) => [s.id, s.title]));
+  const items = discrepancies.data?.items ?? [];
+  const selectedRows = items.filter((d) => selected.has(d.id));
 
   const open = activeId !== null && projectId !== undefined;
   const detailPanel = open ? (
@@ -139,8 +173,8 @@ export function Component() {
       key={activeId}
       discrepancyId={activeId}
       projectId={projectId}
-      onClose={() => setActiveId(null)}
-      canComment={role === 'checker' || role === 'consultant'}
+      onClose={wide ? () => setActiveId(null) : undefined}
+      onOpenOther={setActiveId}
     />
   ) : null;
 
@@ -181,93 +215,115 @@ export function Component() {
       </Field>
       <div className={mergeClasses(styles.layout, open && wide && styles.layoutWithDetail)}>
         <Section>
-          <FiltersBar
-            values={filterValues}
-            onChange={(next) => update(next)}
-            onClear={() => {
-              setParams(new URLSearchParams(projectId ? { projectId: String(projectId), status: '' } : {}), {
-                replace: true,
-              });
-              setSelected(new Set());
-            }}
-          />
-          {filters.submittalId && (
-            <Button
-              size="small"
-              onClick={() => update({ submittalId: undefined })}
-              style={{ marginBottom: tokens.spacingVerticalS }}
-            >
-              Showing submittal #{filters.submittalId} only — show all
-            </Button>
-          )}
-          {role === 'checker' && selected.size > 0 && projectId !== undefined && (
-            <BulkMoveBar
-              projectId={projectId}
-              selectedIds={[...selected]}
-              onDone={() => setSelected(new Set())}
+          {/* Says while a new page is on its way, so a reader (and a test) knows the rows may change. */}
+          <div data-testid="discrepancy-list" aria-busy={discrepancies.isFetching}>
+            <FiltersBar
+              values={filterValues}
+              submittals={submittals.data ?? []}
+              onChange={(next) => update(next)}
+              onClear={() => {
+                setParams(
+                  new URLSearchParams(projectId ? { projectId: String(projectId), status: '' } : {}),
+                  {
+                    replace: true,
+                  },
+                );
+                setSelected(new Set());
+              }}
             />
-          )}
-          {discrepancies.isPending ? (
-            <LoadingState label="Loading discrepancies…" />
-          ) : discrepancies.isError ? (
-            <ErrorState error={discrepancies.error} onRetry={() => void discrepancies.refetch()} />
-          ) : discrepancies.data.items.length === 0 ? (
-            <EmptyState title="Nothing matches these filters" icon={<DocumentBulletListRegular />}>
-              {filters.status?.includes('open')
-                ? 'No open discrepancies: every one has been accepted or waived, or none were raised.'
-                : 'Try other filters.'}
-            </EmptyState>
-          ) : (
-            <>
-              <DiscrepancyGrid
-                items={discrepancies.data.items}
-                sort={filters.sort}
-                order={filters.order}
-                onSort={(sort, order) => update({ sort, order })}
-                selectable={role === 'checker'}
-                selected={selected}
-                onSelect={setSelected}
-                activeId={activeId}
-                onOpen={setActiveId}
-              />
-              <nav className={styles.pager} aria-label="Pages">
-                <Text>
-                  {total} discrepanc{total === 1 ? 'y' : 'ies'} · page {filters.page} of {pages}
-                  {discrepancies.isFetching ? ' · updating…' : ''}
+            <div className={styles.listTools}>
+              {filters.submittalId ? (
+                <Button size="small" onClick={() => update({ submittalId: undefined })}>
+                  Showing submittal #{filters.submittalId} only — show all
+                </Button>
+              ) : (
+                <Text size={200}>
+                  {filters.includeSuperseded
+                    ? 'Every item, with those a later revision carried on or resolved.'
+                    : 'Current items only: a later revision’s carried and resolved items are counted where they are now.'}
                 </Text>
-                <div className={styles.pagerButtons}>
-                  <Dropdown
-                    aria-label="Rows per page"
-                    value={`${filters.pageSize} per page`}
-                    selectedOptions={[String(filters.pageSize)]}
-                    onOptionSelect={(_, d) => update({ pageSize: d.optionValue })}
-                    style={{ minWidth: '140px' }}
-                  >
-                    {[25, 50, 100].map((n) => (
-                      <Option key={n} value={String(n)} text={`${n} per page`}>
-                        {`${n} per page`}
-                      </Option>
-                    ))}
-                  </Dropdown>
-                  <Button
-                    icon={<ChevronLeftRegular />}
-                    disabled={filters.page <= 1}
-                    onClick={() => update({ page: filters.page - 1 }, false)}
-                  >
-                    Previous
-                  </Button>
-                  <Button
-                    icon={<ChevronRightRegular />}
-                    iconPosition="after"
-                    disabled={filters.page >= pages}
-                    onClick={() => update({ page: filters.page + 1 }, false)}
-                  >
-                    Next
-                  </Button>
-                </div>
-              </nav>
-            </>
-          )}
+              )}
+              <Button
+                icon={<ArrowDownloadRegular />}
+                onClick={() => csv.mutate()}
+                disabled={csv.isPending || total === 0 || projectId === undefined}
+              >
+                {csv.isPending ? 'Exporting…' : `Export ${total} as CSV`}
+              </Button>
+            </div>
+            {role === 'checker' && selectedRows.length > 0 && projectId !== undefined && (
+              <BulkMoveBar
+                projectId={projectId}
+                selected={selectedRows}
+                onDone={() => setSelected(new Set())}
+                onNarrow={setSelected}
+              />
+            )}
+            {discrepancies.isPending ? (
+              <LoadingState label="Loading discrepancies…" />
+            ) : discrepancies.isError ? (
+              <ErrorState error={discrepancies.error} onRetry={() => void discrepancies.refetch()} />
+            ) : discrepancies.data.items.length === 0 ? (
+              <EmptyState title="Nothing matches these filters" icon={<DocumentBulletListRegular />}>
+                {filters.q
+                  ? `Nothing matches “${filters.q}” with these filters.`
+                  : filters.status?.includes('open')
+                    ? 'No open discrepancies: every one has been accepted, waived or resolved, or none were raised.'
+                    : 'Try other filters.'}
+              </EmptyState>
+            ) : (
+              <>
+                <DiscrepancyGrid
+                  items={discrepancies.data.items}
+                  sort={filters.sort}
+                  order={filters.order}
+                  onSort={(sort, order) => update({ sort, order })}
+                  selectable={role === 'checker'}
+                  selected={selected}
+                  onSelect={setSelected}
+                  activeId={activeId}
+                  onOpen={setActiveId}
+                  submittalTitles={submittalTitles}
+                />
+                <nav className={styles.pager} aria-label="Pages">
+                  <Text>
+                    {total} discrepanc{total === 1 ? 'y' : 'ies'} · page {filters.page} of {pages}
+                    {discrepancies.isFetching ? ' · updating…' : ''}
+                  </Text>
+                  <div className={styles.pagerButtons}>
+                    <Dropdown
+                      aria-label="Rows per page"
+                      value={`${filters.pageSize} per page`}
+                      selectedOptions={[String(filters.pageSize)]}
+                      onOptionSelect={(_, d) => update({ pageSize: d.optionValue })}
+                      style={{ minWidth: '140px' }}
+                    >
+                      {[25, 50, 100].map((n) => (
+                        <Option key={n} value={String(n)} text={`${n} per page`}>
+                          {`${n} per page`}
+                        </Option>
+                      ))}
+                    </Dropdown>
+                    <Button
+                      icon={<ChevronLeftRegular />}
+                      disabled={filters.page <= 1}
+                      onClick={() => update({ page: filters.page - 1 }, false)}
+                    >
+                      Previous
+                    </Button>
+                    <Button
+                      icon={<ChevronRightRegular />}
+                      iconPosition="after"
+                      disabled={filters.page >= pages}
+                      onClick={() => update({ page: filters.page + 1 }, false)}
+                    >
+                      Next
+                    </Button>
+                  </div>
+                </nav>
+              </>
+            )}
+          </div>
         </Section>
         {open && wide && (
           <aside className={styles.detail} aria-label="Discrepancy details" data-testid="discrepancy-aside">
@@ -285,6 +341,22 @@ export function Component() {
           }}
           aria-label="Discrepancy details"
         >
+          {/* The header's close button is there from the first frame, so the drawer opens with focus on
+              it (not on the drawer itself while the detail loads) and its modal keeps it readable. */}
+          <DrawerHeader>
+            <DrawerHeaderTitle
+              action={
+                <Button
+                  appearance="subtle"
+                  aria-label="Close the details"
+                  icon={<DismissRegular />}
+                  onClick={() => setActiveId(null)}
+                />
+              }
+            >
+              Discrepancy #{activeId}
+            </DrawerHeaderTitle>
+          </DrawerHeader>
           <DrawerBody className={styles.drawerBody}>{detailPanel}</DrawerBody>
         </OverlayDrawer>
       )}
