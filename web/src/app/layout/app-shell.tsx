@@ -17,6 +17,7 @@ import { SignOutRegular, WeatherMoonRegular, WeatherSunnyRegular } from '@fluent
 import { Suspense } from 'react';
 import { NavLink, Outlet, useMatches, useNavigate } from 'react-router-dom';
 import { LogoMark } from '@/components/logo-mark';
+import { NotificationBell } from '@/features/notifications/components/notification-bell';
 import { LoadingState } from '@/components/states';
 import { CAUTION } from '@/config/caution';
 import { paths } from '@/config/paths';
@@ -169,6 +170,7 @@ export function AppShell() {
               onClick={toggle}
             />
           </Tooltip>
+          {session && <NotificationBell signedIn />}
           {session && (
             <Menu>
               <MenuTrigger disableButtonEnhancement>
