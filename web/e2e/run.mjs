@@ -20,6 +20,10 @@ const server = await startServer();
 const browser = await launchBrowser();
 const page = browser.context.pages()[0] ?? (await browser.context.newPage());
 page.setDefaultTimeout(15_000);
+if (process.env.CPU_RATE) {
+  const cdp = await browser.context.newCDPSession(page);
+  await cdp.send('Emulation.setCPUThrottlingRate', { rate: Number(process.env.CPU_RATE) });
+}
 const runner = createRunner({
   async onFailure(stem) {
     await page.screenshot({ path: join(artifacts, `${stem}.png`), fullPage: true, timeout: 5_000 });

@@ -27,9 +27,21 @@ export const expect = (condition, message) => {
  */
 export function createSession(page, server) {
   const consoleErrors = [];
+  /** Console errors a step provokes on purpose (a refused request the browser logs), each allowed once. */
+  const expected = [];
   page.on('console', (msg) => {
-    if (msg.type() === 'error') consoleErrors.push(`${msg.text()} @ ${page.url()}`);
+    if (msg.type() !== 'error') return;
+    const i = expected.findIndex((pattern) => pattern.test(msg.text()));
+    if (i >= 0) expected.splice(i, 1);
+    else consoleErrors.push(`${msg.text()} @ ${page.url()}`);
   });
+  /**
+   * The next console error matching `pattern` is expected (e.g. the browser's own line for a request
+   * the service refuses on purpose) and does not fail the run.
+   */
+  const expectConsoleError = (pattern) => {
+    expected.push(pattern);
+  };
   page.on('pageerror', (error) => consoleErrors.push(`page error: ${error.message} @ ${page.url()}`));
 
   /** A full-page screenshot in e2e/artifacts/, once the fonts are in and no animation is running. */
@@ -64,5 +76,5 @@ export function createSession(page, server) {
     await page.getByRole('menuitem', { name: 'Sign out' }).click();
     await page.getByRole('heading', { name: 'Sign in' }).waitFor();
   };
-  return { page, server, consoleErrors, shot, go, signIn, signOut };
+  return { page, server, consoleErrors, expectConsoleError, shot, go, signIn, signOut };
 }
