@@ -1,0 +1,33 @@
+import type { Schema } from '@/lib/api-schemas';
+
+/** A discrepancy as the list gives it, for component tests (invented demo rows). */
+export const discrepancyRow = (over: Partial<Schema<'DiscrepancyDto'>> = {}): Schema<'DiscrepancyDto'> => ({
+  id: 1,
+  projectId: 1,
+  submittalId: 3,
+  calcFileId: 9,
+  fileName: 'splice-plates.json',
+  memberId: 'SP-1',
+  code: 'LG101',
+  name: 'overstated-net-area',
+  class: 'overstated',
+  severity: 'error',
+  direction: '-x',
+  chain: ['A1', 'B1', 'A2'],
+  claimed: 4.125,
+  recomputed: 3.9125,
+  message: 'Claimed An 4.13 in² exceeds the recomputed 3.91 in² (chain A1-B1-A2, −x) by 5.4 %',
+  pointer: '/members/0/claims/An',
+  status: 'raised',
+  version: 0,
+  acknowledgedAt: null,
+  current: true,
+  supersededBySubmittalId: null,
+  carriedFromId: null,
+  assignee: null,
+  dueDate: null,
+  firstRaisedAt: '2026-12-01T09:00:00.000Z',
+  createdAt: '2026-12-01T09:00:00.000Z',
+  updatedAt: '2026-12-01T09:00:00.000Z',
+  ...over,
+});
