@@ -40,7 +40,7 @@ import type {
 } from './dto/discrepancy.dto.js';
 import { DiscrepancyComment } from './models/discrepancy-comment.model.js';
 import { Discrepancy } from './models/discrepancy.model.js';
-import { quantityOf, unitOf } from './quantity.js';
+import { quantityCells } from './quantity.js';
 
 /** Must match the expression index of migration 0005 character for character. */
 const SEVERITY_RANK_SQL = "CASE severity WHEN 'error' THEN 0 WHEN 'warning' THEN 1 ELSE 2 END";
@@ -335,7 +335,6 @@ export class DiscrepanciesService {
     return csvDocument(
       header,
       rows.map((d) => {
-        const quantity = d.claimed !== null || d.recomputed !== null ? quantityOf(d) : null;
         return [
           d.id,
           d.submittalId,
@@ -354,10 +353,7 @@ export class DiscrepanciesService {
           d.dueDate,
           d.direction,
           d.chain ? d.chain.split(',').join(' ') : '',
-          quantity?.quantity ?? '',
-          d.claimed,
-          d.recomputed,
-          quantity ? unitOf(quantity.dimension, d.units) : '',
+          ...quantityCells(d, d.units),
           d.units,
           d.pointer,
           d.message,

@@ -64,3 +64,15 @@ export function quantityOf(finding: {
 export function unitOf(dimension: Dimension, units: string | null | undefined): string {
   return units === 'in' || units === 'mm' ? UNITS[units][dimension] : '';
 }
+
+/**
+ * The CSV cells of a finding's numbers: quantity, claimed, recomputed and unit (blank quantity and
+ * unit for a finding without numbers). Both CSV exports write them in this order.
+ */
+export function quantityCells(
+  d: { pointer: string; code: string; class: string; claimed: number | null; recomputed: number | null },
+  units: string | null | undefined,
+): [string, number | null, number | null, string] {
+  const q = d.claimed !== null || d.recomputed !== null ? quantityOf(d) : null;
+  return [q?.quantity ?? '', d.claimed, d.recomputed, q ? unitOf(q.dimension, units) : ''];
+}

@@ -4,7 +4,7 @@ import type { FindingClass, Severity } from 'ligament';
 import { Op } from 'sequelize';
 import { csvDocument } from '../common/csv.js';
 import { HotReadsService } from '../database/hot-reads.service.js';
-import { quantityOf, unitOf } from '../discrepancies/quantity.js';
+import { quantityCells } from '../discrepancies/quantity.js';
 import type { AuthUser } from '../auth/auth-user.js';
 import { ProjectAccessService } from '../auth/project-access.service.js';
 import { OPEN_STATUSES } from '../discrepancies/discrepancy-status.js';
@@ -182,7 +182,6 @@ export class DashboardService {
     ];
     const lines = rows.map((d) => {
       const units = unitsOf.get(d.calcFileId) ?? null;
-      const quantity = d.claimed !== null || d.recomputed !== null ? quantityOf(d) : null;
       return [
         names.get(d.projectId),
         d.submittalId,
@@ -195,10 +194,7 @@ export class DashboardService {
         d.severity,
         d.status,
         d.chain ? d.chain.split(',').join(' ') : '',
-        quantity?.quantity ?? '',
-        d.claimed,
-        d.recomputed,
-        quantity ? unitOf(quantity.dimension, units) : '',
+        ...quantityCells(d, units),
         units,
         Math.floor((now.getTime() - new Date(d.firstRaisedAt).getTime()) / DAY),
         new Date(d.firstRaisedAt).toISOString(),
