@@ -20,7 +20,7 @@ import {
   DocumentBulletListRegular,
 } from '@fluentui/react-icons';
 import { useEffect, useState } from 'react';
-import { useSearchParams } from 'react-router-dom';
+import { useLocation, useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
@@ -105,6 +105,7 @@ export function Component() {
   const styles = useStyles();
   const role = useSession()?.user.role;
   const [params, setParams] = useSearchParams();
+  const location = useLocation();
   const projects = useDiscrepancyProjects();
   const [selected, setSelected] = useState<Set<number>>(new Set());
   const [activeId, setActiveId] = useState<number | null>(null);
@@ -216,7 +217,12 @@ export function Component() {
       <div className={mergeClasses(styles.layout, open && wide && styles.layoutWithDetail)}>
         <Section>
           {/* Says while a new page is on its way, so a reader (and a test) knows the rows may change. */}
-          <div data-testid="discrepancy-list" aria-busy={discrepancies.isFetching}>
+          <div
+            data-testid="discrepancy-list"
+            aria-busy={discrepancies.isFetching}
+            // The address whose rows are shown: empty while the rows of the previous one stay on screen.
+            data-search={discrepancies.isSuccess && !discrepancies.isPlaceholderData ? location.search : ''}
+          >
             <FiltersBar
               values={filterValues}
               submittals={submittals.data ?? []}
