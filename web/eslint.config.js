@@ -10,6 +10,7 @@ const features = [
   'dashboard',
   'discrepancies',
   'mailbox',
+  'notifications',
   'projects',
   'submittals',
   'upload',

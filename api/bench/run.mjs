@@ -313,7 +313,7 @@ try {
   const { n: have } = await get(db, 'SELECT COUNT(*) AS n FROM discrepancies WHERE projectId = 1');
   const copies = Math.ceil((TARGET_DISCREPANCIES - have) / have);
   const cols =
-    'projectId, submittalId, calcFileId, fileName, memberId, code, name, class, severity, direction, chain, claimed, recomputed, message, pointer, status, acknowledgedAt, acknowledgedById, createdAt, updatedAt';
+    'projectId, submittalId, calcFileId, fileName, memberId, code, name, class, severity, direction, chain, claimed, recomputed, message, pointer, status, acknowledgedAt, acknowledgedById, createdAt, updatedAt, firstRaisedAt, supersededBySubmittalId, assigneeId, dueDate';
   await run(
     db,
     `INSERT INTO discrepancies (${cols})

@@ -15,6 +15,7 @@ import { DiscrepanciesModule } from './discrepancies/discrepancies.module.js';
 import { EventsModule } from './events/events.module.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { NotificationsModule } from './notifications/notifications.module.js';
 import { OrganisationsModule } from './organisations/organisations.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
 import { ReportsModule } from './reports/reports.module.js';
@@ -60,6 +61,7 @@ import { UsersModule } from './users/users.module.js';
     DiscrepanciesModule,
     EventsModule,
     MailModule,
+    NotificationsModule,
     ReportsModule,
     HealthModule,
     SeedModule,

@@ -46,7 +46,7 @@ interface Ids {
 
 interface Row {
   name: string;
-  method: 'get' | 'post' | 'patch' | 'delete';
+  method: 'get' | 'post' | 'put' | 'patch' | 'delete';
   path: (ids: Ids) => string;
   body?: (ids: Ids) => object;
   upload?: boolean;
@@ -168,6 +168,12 @@ const ROWS: Row[] = [
     allowed: [...MEMBERS, 'tokenOwn'],
   },
   {
+    name: 'GET /projects/:id/discrepancies.csv',
+    method: 'get',
+    path: (i) => `/api/projects/${i.projectA}/discrepancies.csv`,
+    allowed: [...MEMBERS, 'tokenOwn'],
+  },
+  {
     name: 'POST /projects/:id/discrepancies/bulk-transition',
     method: 'post',
     path: (i) => `/api/projects/${i.projectA}/discrepancies/bulk-transition`,
@@ -262,6 +268,20 @@ const ROWS: Row[] = [
     allowed: ['checkerM'],
   },
   {
+    name: 'POST /discrepancies/:id/transitions (returned: reopen or return)',
+    method: 'post',
+    path: (i) => `/api/discrepancies/${i.discrepancy}/transitions`,
+    body: () => ({ to: 'returned' }),
+    allowed: ['checkerM'],
+  },
+  {
+    name: 'PATCH /discrepancies/:id/assignment',
+    method: 'patch',
+    path: (i) => `/api/discrepancies/${i.discrepancy}/assignment`,
+    body: () => ({ dueDate: '2026-12-31' }),
+    allowed: ['checkerM'],
+  },
+  {
     name: 'POST /discrepancies/:id/comments',
     method: 'post',
     path: (i) => `/api/discrepancies/${i.discrepancy}/comments`,
@@ -279,6 +299,43 @@ const ROWS: Row[] = [
     name: 'GET /dashboard/open-discrepancies.csv',
     method: 'get',
     path: () => '/api/dashboard/open-discrepancies.csv',
+    allowed: SIGNED_IN,
+  },
+  {
+    name: 'GET /notifications',
+    method: 'get',
+    path: () => '/api/notifications',
+    allowed: SIGNED_IN,
+  },
+  {
+    name: 'GET /notifications/unread-count',
+    method: 'get',
+    path: () => '/api/notifications/unread-count',
+    allowed: SIGNED_IN,
+  },
+  {
+    name: 'POST /notifications/:id/read',
+    method: 'post',
+    path: () => '/api/notifications/999999/read',
+    allowed: SIGNED_IN,
+  },
+  {
+    name: 'POST /notifications/read-all',
+    method: 'post',
+    path: () => '/api/notifications/read-all',
+    allowed: SIGNED_IN,
+  },
+  {
+    name: 'GET /notifications/settings',
+    method: 'get',
+    path: () => '/api/notifications/settings',
+    allowed: SIGNED_IN,
+  },
+  {
+    name: 'PUT /notifications/settings',
+    method: 'put',
+    path: () => '/api/notifications/settings',
+    body: () => ({ settings: [] }),
     allowed: SIGNED_IN,
   },
   { name: 'GET /tokens', method: 'get', path: () => '/api/tokens', allowed: ['consultantM', 'consultantN'] },

@@ -83,6 +83,97 @@ describe('two people acting on one discrepancy at once', () => {
   });
 });
 
+describe('reopening, assigning and revising at once', () => {
+  it('two reopens of one accepted item: one wins, the other gets 409 with the state that won; one mail', async () => {
+    const { id } = await answeredDiscrepancy('reopen-race');
+    expect((await move('checker', id, { to: 'accepted' })).status).toBe(200);
+    const [a, b] = await Promise.all([
+      move('checker', id, { to: 'returned', note: 'Reopened: first.' }),
+      move('checker', id, { to: 'returned', note: 'Reopened: second.' }),
+    ]);
+    expect([a.status, b.status].sort()).toEqual([200, 409]);
+    const loser = a.status === 409 ? a : b;
+    expect(loser.body.details).toEqual([expect.objectContaining({ id, status: 'returned' })]);
+    expect(loser.body.message).toMatch(/^Someone else changed discrepancy #\d+ first: it is now Returned\./);
+    const events = await sql<{ n: number }>(
+      `SELECT count(*) AS n FROM events WHERE discrepancyId = ? AND type = 'discrepancy.reopened'`,
+      [id],
+    );
+    expect(events[0]?.n).toBe(1);
+    const mails = await sql<{ n: number }>(
+      `SELECT count(*) AS n FROM mail_outbox WHERE kind = 'discrepancy-reopened' AND text LIKE ?`,
+      [`%/discrepancies/${id}\n%`],
+    );
+    expect(mails[0]?.n).toBe(1);
+  });
+
+  it('two assignments at once: one is saved, the other gets 409; one event', async () => {
+    const { id } = await answeredDiscrepancy('assign-race');
+    const me = await request(base).get('/api/auth/me').set(bearer(tok.consultant));
+    const assign = (dueDate: string) =>
+      request(base)
+        .patch(`/api/discrepancies/${id}/assignment`)
+        .set(bearer(tok.checker))
+        .send({ assigneeId: me.body.id, dueDate });
+    const [a, b] = await Promise.all([assign('2026-12-18'), assign('2027-01-08')]);
+    expect([a.status, b.status].sort()).toEqual([200, 409]);
+    const winner = a.status === 200 ? a : b;
+    const detail = await request(base).get(`/api/discrepancies/${id}`).set(bearer(tok.checker));
+    expect(detail.body.dueDate).toBe(winner.body.dueDate);
+    const events = await sql<{ n: number }>(
+      `SELECT count(*) AS n FROM events WHERE discrepancyId = ? AND type = 'discrepancy.assigned'`,
+      [id],
+    );
+    expect(events[0]?.n).toBe(1);
+  });
+
+  it('an assignment and a move at once: one wins; the loser changes nothing', async () => {
+    const { id } = await answeredDiscrepancy('assign-move-race');
+    const [assigned, accepted] = await Promise.all([
+      request(base)
+        .patch(`/api/discrepancies/${id}/assignment`)
+        .set(bearer(tok.checker))
+        .send({ dueDate: '2026-12-24' }),
+      move('checker', id, { to: 'accepted' }),
+    ]);
+    expect([assigned.status, accepted.status].sort()).toEqual([200, 409]);
+    const detail = await request(base).get(`/api/discrepancies/${id}`).set(bearer(tok.checker));
+    expect(detail.body.status).toBe(accepted.status === 200 ? 'accepted' : 'answered');
+    expect(detail.body.dueDate).toBe(assigned.status === 200 ? '2026-12-24' : null);
+  });
+
+  it('a revision and a move on the item it fixes at once: the item ends resolved, the move is made or refused whole', async () => {
+    const res = await upload('rev-race');
+    const submittalId = res.body.submittalId as number;
+    const list = await request(base)
+      .get(`/api/projects/1/discrepancies?submittalId=${submittalId}`)
+      .set(bearer(tok.checker));
+    const id = (list.body.items as { id: number }[])[0]?.id as number;
+    const [revision, answered] = await Promise.all([
+      request(base)
+        .post('/api/projects/1/submittals')
+        .set(bearer(tok.consultant))
+        .field('title', 'Parallel rev-race fixed')
+        .field('revisionOf', String(submittalId))
+        .attach('files', calcFile('SP-rev-race'), 'rev-race.json'),
+      move('consultant', id, { to: 'answered', note: 'Fixed in the next issue.' }),
+    ]);
+    expect(revision.status).toBe(201);
+    expect([200, 409]).toContain(answered.status);
+    const rows = await sql<{ status: string; supersededBySubmittalId: number }>(
+      'SELECT status, supersededBySubmittalId FROM discrepancies WHERE id = ?',
+      [id],
+    );
+    expect(rows[0]).toEqual({ status: 'resolved', supersededBySubmittalId: revision.body.submittalId });
+    const types = await sql<{ type: string }>('SELECT type FROM events WHERE discrepancyId = ? ORDER BY id', [
+      id,
+    ]);
+    expect(types.map((e) => e.type)).toEqual(
+      answered.status === 200 ? ['discrepancy.answered', 'discrepancy.resolved'] : ['discrepancy.resolved'],
+    );
+  });
+});
+
 describe('two checkers stamping one submittal at once', () => {
   it('exactly one stamp is applied and mailed; the other gets 409 with the stamp that won', async () => {
     const res = await upload('stamp-race');

@@ -23,23 +23,32 @@ type Tally = {
   class: string;
   severity: string;
   status: string;
+  current: number;
   n: number;
 };
-const KEY = 'projectId, submittalId, class, severity, status';
+const KEY = 'projectId, submittalId, class, severity, status, current';
+const KEY_OF_ROWS =
+  'projectId, submittalId, class, severity, status, (supersededBySubmittalId IS NULL) AS current';
 
 async function tallies(): Promise<{ kept: Tally[]; counted: Tally[] }> {
   const [kept] = await sequelize.query(`SELECT ${KEY}, n FROM discrepancy_tallies ORDER BY ${KEY}`);
   const [counted] = await sequelize.query(
-    `SELECT ${KEY}, COUNT(*) AS n FROM discrepancies GROUP BY ${KEY} ORDER BY ${KEY}`,
+    `SELECT ${KEY_OF_ROWS}, COUNT(*) AS n FROM discrepancies GROUP BY ${KEY} ORDER BY ${KEY}`,
   );
   return { kept: kept as Tally[], counted: counted as Tally[] };
 }
 
-describe('discrepancy tallies (migration 0003)', () => {
+describe('discrepancy tallies (migrations 0003 and 0005)', () => {
   it('match the rows after the demo seed', async () => {
     const { kept, counted } = await tallies();
     expect(counted.length).toBeGreaterThan(0);
     expect(kept).toEqual(counted);
+  });
+
+  it('count current and superseded items apart after the demo revision', async () => {
+    const { kept } = await tallies();
+    expect(kept.some((x) => x.current === 0)).toBe(true);
+    expect(kept.some((x) => x.current === 1)).toBe(true);
   });
 
   it('follow inserts, status moves, re-keying updates and deletes, whoever writes', async () => {
@@ -69,6 +78,17 @@ describe('discrepancy tallies (migration 0003)', () => {
     await sequelize.query("UPDATE discrepancies SET message = 'unchanged key' WHERE id = :c", {
       replacements: { c },
     });
+    // Superseded and back: the tally moves between current and not.
+    await sequelize.query('UPDATE discrepancies SET supersededBySubmittalId = 2 WHERE id = :b', {
+      replacements: { b },
+    });
+    let now = await tallies();
+    expect(now.kept).toEqual(now.counted);
+    await sequelize.query('UPDATE discrepancies SET supersededBySubmittalId = NULL WHERE id = :b', {
+      replacements: { b },
+    });
+    now = await tallies();
+    expect(now.kept).toEqual(now.counted);
     await sequelize.query('DELETE FROM discrepancies WHERE id IN (:ids)', { replacements: { ids: [a, c] } });
     const { kept, counted } = await tallies();
     expect(kept).toEqual(counted);

@@ -82,14 +82,15 @@ describe('status moves that are allowed', () => {
     expect((await move('checker', c, { to: 'waived', note: 'r' })).body.status).toBe('waived');
   });
 
-  it('an answer may link the revision that fixes it instead of a note', async () => {
+  it('an answer may link a revision instead of a note, while the item is current', async () => {
     const { submittalId, ids } = await freshDiscrepancies('R1');
+    // A revision holding other files only: it does not re-check R1.json, so the item stays current.
     const revision = await request(t.http)
       .post('/api/projects/1/submittals')
       .set(bearer(tok.consultant))
       .field('title', 'Fix R1')
       .field('revisionOf', String(submittalId))
-      .attach('files', calcFile('SP-R1'), 'R1.json');
+      .attach('files', calcFile('SP-R1-DETAIL'), 'R1-detail.json');
     const res = await move('consultant', ids[0] as number, {
       to: 'answered',
       revisionSubmittalId: revision.body.submittalId,
@@ -289,7 +290,20 @@ describe('bulk moves, comments, acknowledgement, list', () => {
       .get(`/api/discrepancies/${String(first.id)}`)
       .set(bearer(tok.owner));
     expect(Object.fromEntries(Object.keys(first).map((k) => [k, detail.body[k]]))).toEqual(first);
-    const extra = ['raisedBy', 'submittalTitle', 'history', 'comments', 'allowedMoves', 'canAcknowledge'];
+    const extra = [
+      'raisedBy',
+      'submittalTitle',
+      'history',
+      'comments',
+      'lineage',
+      'carriedInto',
+      'resolution',
+      'allowedMoves',
+      'moves',
+      'canAcknowledge',
+      'canAssign',
+      'canComment',
+    ];
     expect(Object.keys(first).sort()).toEqual(
       Object.keys(detail.body)
         .filter((k) => !extra.includes(k))
@@ -300,8 +314,17 @@ describe('bulk moves, comments, acknowledgement, list', () => {
   it('gives every filter and sort the same rows, order and total as filtering all rows by hand', async () => {
     type Item = Record<string, string | number | null> & { id: number };
     const all = (
-      await request(t.http).get('/api/projects/1/discrepancies?pageSize=500').set(bearer(tok.owner))
-    ).body.items as Item[];
+      await request(t.http)
+        .get('/api/projects/1/discrepancies?pageSize=500&includeSuperseded=true')
+        .set(bearer(tok.owner))
+    ).body.items as (Item & { current: boolean })[];
+    expect(all.some((d) => !d.current)).toBe(true);
+    const text = (d: Item, q: string) =>
+      ['message', 'memberId', 'fileName', 'code', 'name', 'pointer'].some((k) =>
+        String(d[k] ?? '')
+          .toLowerCase()
+          .includes(q.toLowerCase()),
+      );
     const rank = (s: unknown) => ['error', 'warning', 'note'].indexOf(String(s));
     const value = (d: Item, sort: string) => (sort === 'severity' ? rank(d.severity) : d[sort]);
     const cmp = (x: unknown, y: unknown) =>
@@ -315,29 +338,51 @@ describe('bulk moves, comments, acknowledgement, list', () => {
               ? -1
               : 1;
     const memberId = all.find((d) => d.memberId)?.memberId as string;
-    const filters: [string, (d: Item) => boolean][] = [
-      ['', () => true],
-      ['status=open', (d) => ['raised', 'answered', 'returned'].includes(String(d.status))],
+    const assigned = all.find((d) => d.assignee !== null)?.assignee as unknown as { id: number };
+    const oneCurrent = all.filter((d) => d.current)[2]?.id;
+    const filters: [string, (d: Item & { current: boolean }) => boolean][] = [
+      ['', (d) => d.current],
+      ['includeSuperseded=true', () => true],
+      ['includeSuperseded=true&status=resolved', (d) => d.status === 'resolved'],
+      [
+        'includeSuperseded=false&status=open',
+        (d) => d.current && ['raised', 'answered', 'returned'].includes(String(d.status)),
+      ],
+      ['q=CHAIN', (d) => d.current && text(d, 'chain')],
+      ['q=claims%2FAn&includeSuperseded=true', (d) => text(d, 'claims/An')],
+      ['q=100%25', (d) => d.current && text(d, '100%')],
+      [`q=%23${oneCurrent}`, (d) => d.current && (d.id === oneCurrent || text(d, `#${oneCurrent}`))],
+      [
+        `assigneeId=${assigned.id}&includeSuperseded=true`,
+        (d) => (d.assignee as unknown as { id: number } | null)?.id === assigned.id,
+      ],
+      ['status=open', (d) => d.current && ['raised', 'answered', 'returned'].includes(String(d.status))],
       [
         'status=accepted,waived&severity=error',
-        (d) => ['accepted', 'waived'].includes(String(d.status)) && d.severity === 'error',
+        (d) => d.current && ['accepted', 'waived'].includes(String(d.status)) && d.severity === 'error',
       ],
       [
         'class=overstated,detailing&status=raised',
-        (d) => ['overstated', 'detailing'].includes(String(d.class)) && d.status === 'raised',
+        (d) => d.current && ['overstated', 'detailing'].includes(String(d.class)) && d.status === 'raised',
       ],
       [
         `submittalId=${all[0]?.submittalId}&severity=warning,note`,
-        (d) => d.submittalId === all[0]?.submittalId && d.severity !== 'error',
+        (d) => d.current && d.submittalId === all[0]?.submittalId && d.severity !== 'error',
       ],
       [
         `memberId=${memberId}&status=open`,
-        (d) => d.memberId === memberId && ['raised', 'answered', 'returned'].includes(String(d.status)),
+        (d) =>
+          d.current &&
+          d.memberId === memberId &&
+          ['raised', 'answered', 'returned'].includes(String(d.status)),
       ],
-      ['code=LG101', (d) => d.code === 'LG101'],
+      ['code=LG101', (d) => d.current && d.code === 'LG101'],
     ];
     for (const [filter, keep] of filters) {
-      for (const sort of ['id', 'severity', 'memberId', 'status', 'updatedAt']) {
+      // The text, assignee and superseded filters are each seen to match something.
+      if (/^(q=|assigneeId|includeSuperseded=true)/.test(filter) && filter !== 'q=100%25')
+        expect({ filter, matches: all.filter(keep).length > 0 }).toEqual({ filter, matches: true });
+      for (const sort of ['id', 'severity', 'memberId', 'status', 'updatedAt', 'submittalId']) {
         for (const order of ['asc', 'desc'] as const) {
           const expected = all
             .filter(keep)

@@ -77,15 +77,17 @@ describe('discrepancies carry the unit system and quantity of their numbers', ()
     ]);
   });
 
-  it('in the open-discrepancies CSV: claimed and recomputed with their units', async () => {
+  it('in the open-discrepancies CSV: claimed and recomputed at the file precision, with their units', async () => {
     const csv = (
       await request(t.http).get('/api/dashboard/open-discrepancies.csv?projectId=1').set(bearer(checker))
     ).text;
     const line = (member: string) => csv.split('\r\n').find((l) => l.includes(`,"${member}","LG101",`)) ?? '';
-    expect(line('SP-IN')).toContain(',"6.000 in²","5.125 in²",');
-    expect(line('H-S1')).toContain(',"3232 mm²","2988 mm²",');
-    // A finding without a claimed value leaves the cell empty.
-    expect(csv).toMatch(/,"LG142",[^\r\n]*,"","1\.000",/);
+    // quantity, claimed, recomputed, unit, unit system: numbers for a spreadsheet, rounded as the
+    // file writes them (2987.64 mm² → 2988).
+    expect(line('SP-IN')).toContain(',"An",6,5.125,"in²","in",');
+    expect(line('H-S1')).toContain(',"An",3232,2988,"mm²","mm",');
+    // A detailing finding compares a distance with the code's limit (AISC 360-16 Table J3.4: 1 in).
+    expect(csv).toMatch(/,"LG202",[^\r\n]*,"edge distance",0\.875,1,"in","in",/);
   });
 });
 

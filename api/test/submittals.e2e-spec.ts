@@ -301,7 +301,12 @@ describe('revision diff and recheck (seeded issue A → issue B)', () => {
       matchedBy: 'member-ids',
       previousFile: 'gusset-g2.json',
     });
-    expect(byFile.get('hanger-h1.json')).toMatchObject({ change: 'unchanged', patch: '' });
+    expect(byFile.get('dc-splice-south.json')).toMatchObject({ change: 'unchanged', patch: '' });
+    // Issue B does not reissue the hanger's file (its items stay with issue A).
+    const removed = (res.body.files as { change: string; previousFile: string }[]).filter(
+      (f) => f.change === 'removed',
+    );
+    expect(removed.map((f) => f.previousFile)).toEqual(['hanger-h1.json']);
     const north = byFile.get('dc-splice-north.json')?.patch ?? '';
     expect(north).toContain('--- a/dc-splice-north.json');
     expect(north).toMatch(/^-\s+"An": 6\.125,?$/m);
@@ -343,10 +348,10 @@ describe('revision diff and recheck (seeded issue A → issue B)', () => {
         },
       ]),
     );
-    expect(files.find((f) => f.currentFile === 'hanger-h1.json')?.changes).toEqual([]);
+    expect(files.find((f) => f.currentFile === 'dc-splice-south.json')?.changes).toEqual([]);
   });
 
-  it('says which discrepancies the revision closed, kept and opened (code + member + chain)', async () => {
+  it('says which discrepancies the revision resolved (closed), carried on (kept) and raised anew (opened)', async () => {
     const res = await request(t.http).get('/api/submittals/2/diff').set(bearer(checker));
     const key = (d: { code: string; memberId: string }) => `${d.code} ${d.memberId}`;
     const closed = (res.body.closed as { code: string; memberId: string }[]).map(key);
@@ -358,7 +363,8 @@ describe('revision diff and recheck (seeded issue A → issue B)', () => {
       expect.arrayContaining(['LG101 SP-N1', 'LG121 SP-N1', 'LG122 G-2', 'LG124 G-2', 'LG142 B-L2']),
     );
     expect(opened).toEqual(expect.arrayContaining(['LG101 T-1', 'LG102 T-1', 'LG103 T-1']));
-    expect(kept).toEqual(expect.arrayContaining(['LG131 H-1', 'LG111 SP-S1']));
+    expect(kept).toEqual(expect.arrayContaining(['LG124 SP-S1', 'LG111 SP-S1', 'LG112 G-2']));
+    expect(kept.some((k) => k.endsWith('H-1'))).toBe(false);
     expect(closed.filter((k) => kept.includes(k))).toEqual([]);
   });
 
@@ -367,7 +373,7 @@ describe('revision diff and recheck (seeded issue A → issue B)', () => {
     const classes = new Set<string>();
     for (const submittalId of [1, 2]) {
       const res = await request(t.http)
-        .get(`/api/projects/1/discrepancies?submittalId=${submittalId}&pageSize=500`)
+        .get(`/api/projects/1/discrepancies?submittalId=${submittalId}&pageSize=500&includeSuperseded=true`)
         .set(bearer(checker));
       for (const d of res.body.items as { class: string }[]) classes.add(d.class);
     }
@@ -381,7 +387,7 @@ describe('revision diff and recheck (seeded issue A → issue B)', () => {
 
   it('rechecks with the current engine and reports no change when nothing changed', async () => {
     const stored = await request(t.http)
-      .get('/api/projects/1/discrepancies?submittalId=1&pageSize=1')
+      .get('/api/projects/1/discrepancies?submittalId=1&pageSize=1&includeSuperseded=true')
       .set(bearer(checker));
     const res = await request(t.http).post('/api/submittals/1/recheck').set(bearer(checker));
     expect(res.status).toBe(200);

@@ -4,6 +4,8 @@ import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { Event } from '../events/models/event.model.js';
 import { MailboxMessage } from '../mail/models/mailbox-message.model.js';
 import { OutboxMessage } from '../mail/models/outbox-message.model.js';
+import { NotificationSetting } from '../notifications/models/notification-setting.model.js';
+import { Notification } from '../notifications/models/notification.model.js';
 import { Organisation } from '../organisations/models/organisation.model.js';
 import { ProjectMember } from '../projects/models/project-member.model.js';
 import { Project } from '../projects/models/project.model.js';
@@ -33,4 +35,6 @@ export const MODELS = [
   MailboxMessage,
   Session,
   RefreshToken,
+  Notification,
+  NotificationSetting,
 ];

@@ -1,8 +1,9 @@
 import { Module } from '@nestjs/common';
 import { SequelizeModule } from '@nestjs/sequelize';
 import { EventsModule } from '../events/events.module.js';
-import { MailModule } from '../mail/mail.module.js';
+import { NotificationsModule } from '../notifications/notifications.module.js';
 import { ProjectMember } from '../projects/models/project-member.model.js';
+import { Project } from '../projects/models/project.model.js';
 import { Submittal } from '../submittals/models/submittal.model.js';
 import { DiscrepanciesController } from './discrepancies.controller.js';
 import { DiscrepanciesService } from './discrepancies.service.js';
@@ -11,9 +12,9 @@ import { Discrepancy } from './models/discrepancy.model.js';
 
 @Module({
   imports: [
-    SequelizeModule.forFeature([Discrepancy, DiscrepancyComment, Submittal, ProjectMember]),
+    SequelizeModule.forFeature([Discrepancy, DiscrepancyComment, Submittal, ProjectMember, Project]),
     EventsModule,
-    MailModule,
+    NotificationsModule,
   ],
   controllers: [DiscrepanciesController],
   providers: [DiscrepanciesService],

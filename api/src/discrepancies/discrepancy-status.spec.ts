@@ -11,6 +11,9 @@ const ALLOWED: [DiscrepancyStatus, DiscrepancyStatus, Role][] = [
   ['raised', 'waived', Role.Checker],
   ['answered', 'waived', Role.Checker],
   ['returned', 'waived', Role.Checker],
+  // reopen: accepted or waived back to the consultant as returned
+  ['accepted', 'returned', Role.Checker],
+  ['waived', 'returned', Role.Checker],
 ];
 const TARGETS: DiscrepancyStatus[] = ['answered', 'accepted', 'returned', 'waived'];
 const ROLES = [Role.Admin, Role.Consultant, Role.Checker, Role.OwnerRep];
@@ -38,5 +41,27 @@ describe('refusal (the discrepancy status flow)', () => {
     expect(refusal({ status: 'answered' }, { to: 'returned' }, Role.Checker)?.status).toBe(400);
     expect(refusal({ status: 'raised' }, { to: 'waived' }, Role.Checker)?.status).toBe(400);
     expect(refusal({ status: 'answered' }, { to: 'accepted' }, Role.Checker)).toBeNull();
+  });
+
+  it('asks a reopen for a note, and makes it one at a time (never in a bulk move)', () => {
+    expect(refusal({ status: 'accepted' }, { to: 'returned' }, Role.Checker)?.message).toMatch(/Reopening/);
+    expect(refusal({ status: 'waived' }, { to: 'returned', note: 'again' }, Role.Checker)).toBeNull();
+    expect(
+      refusal({ status: 'waived' }, { to: 'returned', note: 'again' }, Role.Checker, { bulk: true }),
+    ).toMatchObject({ status: 409, message: expect.stringMatching(/one at a time/) });
+    expect(
+      refusal({ status: 'answered' }, { to: 'returned', note: 'r' }, Role.Checker, { bulk: true }),
+    ).toBeNull();
+  });
+
+  it('refuses every move on a superseded item, and any move out of resolved', () => {
+    const superseded = { status: 'raised' as const, supersededBySubmittalId: 4 };
+    expect(refusal(superseded, { to: 'waived', note: 'n' }, Role.Checker)).toMatchObject({
+      status: 409,
+      message: expect.stringMatching(/superseded by submittal #4/),
+    });
+    for (const to of TARGETS)
+      for (const role of [Role.Checker, Role.Consultant])
+        expect(refusal({ status: 'resolved' }, { to, note: 'n' }, role)?.status).toBeGreaterThanOrEqual(403);
   });
 });

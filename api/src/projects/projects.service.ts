@@ -117,7 +117,10 @@ export class ProjectsService {
   private async view(p: Project): Promise<ProjectDto> {
     const [submittalCount, openDiscrepancyCount] = await Promise.all([
       this.submittals.count({ where: { projectId: p.id } }),
-      this.discrepancies.count({ where: { projectId: p.id, status: { [Op.in]: [...OPEN_STATUSES] } } }),
+      // Current items only: one a later revision carried on or resolved is not open any more here.
+      this.discrepancies.count({
+        where: { projectId: p.id, status: { [Op.in]: [...OPEN_STATUSES] }, supersededBySubmittalId: null },
+      }),
     ]);
     return {
       id: p.id,

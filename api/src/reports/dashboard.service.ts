@@ -1,7 +1,10 @@
 import { ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
-import { quantityText, type FindingClass, type Severity } from 'ligament';
+import type { FindingClass, Severity } from 'ligament';
 import { Op } from 'sequelize';
+import { csvDocument } from '../common/csv.js';
+import { HotReadsService } from '../database/hot-reads.service.js';
+import { quantityCells } from '../discrepancies/quantity.js';
 import type { AuthUser } from '../auth/auth-user.js';
 import { ProjectAccessService } from '../auth/project-access.service.js';
 import { OPEN_STATUSES } from '../discrepancies/discrepancy-status.js';
@@ -13,20 +16,18 @@ import type { DashboardDto } from './dto/dashboard.dto.js';
 
 const DAY = 86_400_000;
 
-function csvCell(value: unknown): string {
-  const text = value === null || value === undefined ? '' : String(value);
-  // Quote always; neutralise spreadsheet formulas.
-  const safe = /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
-  return `"${safe.replace(/"/g, '""')}"`;
-}
-
-/** Open findings across the caller's projects, by class, severity and age, and the trend per submittal. */
+/**
+ * Open findings across the caller's projects, by class, severity and age, and the trend per
+ * submittal. Only current items count (not superseded by a later revision); `superseded` says how
+ * many open-looking items a revision has taken over, so nobody wonders where they went.
+ */
 @Injectable()
 export class DashboardService {
   constructor(
     @InjectModel(Discrepancy) private readonly discrepancies: typeof Discrepancy,
     @InjectModel(Submittal) private readonly submittals: typeof Submittal,
     @InjectModel(Project) private readonly projects: typeof Project,
+    private readonly reads: HotReadsService,
     private readonly access: ProjectAccessService,
   ) {}
 
@@ -44,7 +45,15 @@ export class DashboardService {
       }),
       this.discrepancies.findAll({
         where: { projectId: { [Op.in]: ids } },
-        attributes: ['projectId', 'submittalId', 'class', 'severity', 'status', 'createdAt'],
+        attributes: [
+          'projectId',
+          'submittalId',
+          'class',
+          'severity',
+          'status',
+          'firstRaisedAt',
+          'supersededBySubmittalId',
+        ],
         raw: true,
       }),
     ]);
@@ -60,8 +69,11 @@ export class DashboardService {
       { raised: number; open: number; bySeverity: Record<Severity, number> }
     >();
     let openTotal = 0;
+    let superseded = 0;
     for (const d of discrepancies) {
-      const open = OPEN_STATUSES.includes(d.status);
+      const current = d.supersededBySubmittalId === null;
+      if (!current) superseded++;
+      const open = current && OPEN_STATUSES.includes(d.status);
       const s = perSubmittal.get(d.submittalId) ?? {
         raised: 0,
         open: 0,
@@ -75,7 +87,7 @@ export class DashboardService {
       openTotal++;
       openByClass[d.class]++;
       openBySeverity[d.severity]++;
-      const age = (now.getTime() - new Date(d.createdAt).getTime()) / DAY;
+      const age = (now.getTime() - new Date(d.firstRaisedAt).getTime()) / DAY;
       if (age <= 7) openByAge.week++;
       else if (age <= 30) openByAge.month++;
       else if (age <= 90) openByAge.quarter++;
@@ -94,6 +106,7 @@ export class DashboardService {
         submittals: submittals.filter((s) => s.projectId === p.id).length,
       })),
       openTotal,
+      superseded,
       openByClass,
       openBySeverity,
       openByAge,
@@ -115,13 +128,20 @@ export class DashboardService {
     };
   }
 
-  /** Every open discrepancy of the caller's projects as CSV (RFC 4180, header row). */
+  /**
+   * Every current open discrepancy of the caller's projects as CSV (RFC 4180, UTF-8 with BOM, header
+   * row), with the quantity, unit and unit system of the claimed and recomputed numbers.
+   */
   async openCsv(user: AuthUser, projectId?: number, now = new Date()): Promise<string> {
     const ids = await this.scope(user, projectId);
     const [projects, rows] = await Promise.all([
       this.projects.findAll({ where: { id: { [Op.in]: ids } }, attributes: ['id', 'name'] }),
       this.discrepancies.findAll({
-        where: { projectId: { [Op.in]: ids }, status: { [Op.in]: [...OPEN_STATUSES] } },
+        where: {
+          projectId: { [Op.in]: ids },
+          status: { [Op.in]: [...OPEN_STATUSES] },
+          supersededBySubmittalId: null,
+        },
         order: [
           ['projectId', 'ASC'],
           ['id', 'ASC'],
@@ -129,6 +149,15 @@ export class DashboardService {
         raw: true,
       }),
     ]);
+    const fileIds = [...new Set(rows.map((d) => d.calcFileId))];
+    const files = fileIds.length
+      ? await this.reads.all<{ id: number; units: string | null }>(
+          `SELECT id, json_extract(document, '$.profile.units') AS units FROM calc_files
+           WHERE id IN (${fileIds.map(() => '?').join(', ')})`,
+          fileIds,
+        )
+      : [];
+    const unitsOf = new Map(files.map((f) => [f.id, f.units]));
     const names = new Map(projects.map((p) => [p.id, p.name]));
     const header = [
       'project',
@@ -142,14 +171,18 @@ export class DashboardService {
       'severity',
       'status',
       'chain',
+      'quantity',
       'claimed',
       'recomputed',
+      'unit',
+      'unit_system',
       'age_days',
       'raised_at',
       'message',
     ];
-    const lines = rows.map((d) =>
-      [
+    const lines = rows.map((d) => {
+      const units = unitsOf.get(d.calcFileId) ?? null;
+      return [
         names.get(d.projectId),
         d.submittalId,
         d.id,
@@ -161,16 +194,14 @@ export class DashboardService {
         d.severity,
         d.status,
         d.chain ? d.chain.split(',').join(' ') : '',
-        d.claimed === null ? '' : quantityText(d.claimed, d.quantity, d.units),
-        d.recomputed === null ? '' : quantityText(d.recomputed, d.quantity, d.units),
-        Math.floor((now.getTime() - new Date(d.createdAt).getTime()) / DAY),
-        new Date(d.createdAt).toISOString(),
+        ...quantityCells(d, units),
+        units,
+        Math.floor((now.getTime() - new Date(d.firstRaisedAt).getTime()) / DAY),
+        new Date(d.firstRaisedAt).toISOString(),
         d.message,
-      ]
-        .map(csvCell)
-        .join(','),
-    );
-    return `${[header.map(csvCell).join(','), ...lines].join('\r\n')}\r\n`;
+      ];
+    });
+    return csvDocument(header, lines);
   }
 
   private async scope(user: AuthUser, projectId?: number): Promise<number[]> {

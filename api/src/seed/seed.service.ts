@@ -202,18 +202,38 @@ export class SeedService {
       readSeedFiles('rev-b'),
       priya,
     );
-    const overstated = raised.filter((d) => d.class === 'overstated' && d.status === 'raised').slice(0, 2);
-    for (const d of overstated) {
+    // Issue B re-checked every file but the hanger's (not reissued): what it fixed is resolved, the
+    // rest carried on with its status. Work on the current items goes on in issue B.
+    const carried = await this.discrepancies.findAll({
+      where: { submittalId: second.submittalId },
+      order: [['id', 'ASC']],
+    });
+    const newInB = carried.find((d) => d.carriedFromId === null && d.status === 'raised');
+    if (newInB) {
       await this.discrepancyService.move(
-        d.id,
-        {
-          to: 'answered',
-          revisionSubmittalId: second.submittalId,
-          note: 'Recomputed with the zigzag chain in issue B.',
-        },
+        newInB.id,
+        { to: 'answered', note: 'The tie was re-rated in issue B; the claim follows the new plate.' },
         priya,
       );
+      await this.discrepancyService.assign(newInB.id, { assigneeId: tomasz.id }, tomasz);
     }
+    const returned = carried.find((d) => d.status === 'returned');
+    if (returned)
+      await this.discrepancyService.assign(
+        returned.id,
+        { assigneeId: priya.id, dueDate: '2026-12-18' },
+        tomasz,
+      );
+    const accepted = carried.find((d) => d.status === 'accepted' && d.memberId === 'G-2');
+    if (accepted)
+      await this.discrepancyService.move(
+        accepted.id,
+        {
+          to: 'returned',
+          note: 'Reopened: show Ae of the issue B gusset in the calc itself, not only in the note.',
+        },
+        tomasz,
+      );
     await this.invitations.create(
       { email: 'noor@fennick-ode.example.test', name: 'Noor Castellan', role: Role.Consultant },
       who(Role.Admin),

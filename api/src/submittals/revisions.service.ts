@@ -1,11 +1,12 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
+import { Op } from 'sequelize';
 import { createTwoFilesPatch } from 'diff';
 import { diffDocuments, type CalcDocument } from 'ligament';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import { canonicalJson } from '../common/hash.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
-import { findingKey } from '../results/result-rows.js';
+import { matchFiles } from '../discrepancies/discrepancy-identity.js';
 import type { DiffDiscrepancyDto, FileDiffDto, RevisionDiffDto } from './dto/revision.dto.js';
 import { SubmittalsService } from './submittals.service.js';
 
@@ -40,32 +41,22 @@ export function changesByMeaning(
 }
 
 /**
- * Pairs each current file with its counterpart in the previous submittal: same file name first, then
- * the previous file sharing the most member ids. Unpaired files are added / removed.
+ * Pairs each current file with its counterpart in the previous submittal (`matchFiles`: same file
+ * name first, then the previous file sharing the most member ids). Unpaired files are added / removed.
  */
 export function pairFiles(previous: readonly Pairable[], current: readonly Pairable[]): FileDiffDto[] {
-  const left = new Set(previous);
+  const pairs = matchFiles(previous, current);
+  const paired = new Set(pairs.values());
   const out: FileDiffDto[] = [];
-  const pending: Pairable[] = [];
+  const byName: FileDiffDto[] = [];
+  const byMembers: FileDiffDto[] = [];
+  const added: FileDiffDto[] = [];
   for (const file of current) {
-    const same = previous.find((p) => left.has(p) && p.fileName === file.fileName);
-    if (same) {
-      left.delete(same);
-      out.push(diffPair(same, file, 'file-name'));
-    } else pending.push(file);
-  }
-  for (const file of pending) {
-    let best: Pairable | undefined;
-    let bestShared = 0;
-    for (const p of left) {
-      const shared = p.memberIds.filter((id) => file.memberIds.includes(id)).length;
-      if (shared > bestShared) [best, bestShared] = [p, shared];
-    }
-    if (best) {
-      left.delete(best);
-      out.push(diffPair(best, file, 'member-ids'));
-    } else {
-      out.push({
+    const previousFile = pairs.get(file);
+    if (previousFile?.fileName === file.fileName) byName.push(diffPair(previousFile, file, 'file-name'));
+    else if (previousFile) byMembers.push(diffPair(previousFile, file, 'member-ids'));
+    else
+      added.push({
         change: 'added',
         previousFile: null,
         currentFile: file.fileName,
@@ -73,9 +64,10 @@ export function pairFiles(previous: readonly Pairable[], current: readonly Paira
         patch: createTwoFilesPatch('/dev/null', `b/${file.fileName}`, '', canonicalFileText(file)),
         changes: changesByMeaning(null, file.document),
       });
-    }
   }
-  for (const p of left) {
+  out.push(...byName, ...byMembers, ...added);
+  for (const p of previous) {
+    if (paired.has(p)) continue;
     out.push({
       change: 'removed',
       previousFile: p.fileName,
@@ -133,19 +125,32 @@ export class RevisionsService {
       this.discrepancies.findAll({ where: { submittalId: previousId }, order: [['id', 'ASC']] }),
       this.discrepancies.findAll({ where: { submittalId }, order: [['id', 'ASC']] }),
     ]);
-    const currentByKey = new Map(curDisc.map((d) => [findingKey(d), d]));
-    const previousKeys = new Set(prevDisc.map((d) => findingKey(d)));
-    const kept = prevDisc.flatMap((d) => {
-      const match = currentByKey.get(findingKey(d));
-      return match ? [{ previous: brief(d), current: brief(match) }] : [];
+    // The links the upload recorded (discrepancy-identity.ts): a kept item continues one of an earlier
+    // submittal; a closed one was resolved by this revision; an opened one continues nothing.
+    const ancestors = await this.discrepancies.findAll({
+      where: {
+        [Op.or]: [
+          { id: { [Op.in]: curDisc.flatMap((d) => (d.carriedFromId === null ? [] : [d.carriedFromId])) } },
+          { supersededBySubmittalId: submittalId, status: 'resolved' },
+        ],
+      },
+      order: [['id', 'ASC']],
+    });
+    const byId = new Map([...prevDisc, ...ancestors].map((d) => [d.id, d]));
+    const kept = curDisc.flatMap((d) => {
+      const previous = d.carriedFromId === null ? undefined : byId.get(d.carriedFromId);
+      return previous ? [{ previous: brief(previous), current: brief(d) }] : [];
     });
     return {
       submittalId,
       previousSubmittalId: previousId,
       files: pairFiles(prevFiles, curFiles),
-      closed: prevDisc.filter((d) => !currentByKey.has(findingKey(d))).map(brief),
+      closed: [...byId.values()]
+        .filter((d) => d.supersededBySubmittalId === submittalId && d.status === 'resolved')
+        .sort((a, b) => a.id - b.id)
+        .map(brief),
       kept,
-      opened: curDisc.filter((d) => !previousKeys.has(findingKey(d))).map(brief),
+      opened: curDisc.filter((d) => d.carriedFromId === null).map(brief),
     };
   }
 }

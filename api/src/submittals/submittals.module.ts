@@ -4,6 +4,7 @@ import { MulterModule } from '@nestjs/platform-express';
 import { SequelizeModule } from '@nestjs/sequelize';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import { uploadsConfig } from '../config/index.js';
+import { DiscrepancyRevisionsService } from '../discrepancies/discrepancy-revisions.service.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { EventsModule } from '../events/events.module.js';
 import { MailModule } from '../mail/mail.module.js';
@@ -34,7 +35,14 @@ import { SubmittalsService } from './submittals.service.js';
     MailModule,
   ],
   controllers: [SubmittalsController],
-  providers: [SubmittalsService, RevisionsService, RecheckService, RecomputePool],
+  // Carrying discrepancies across a revision is part of storing the revision (same transaction).
+  providers: [
+    SubmittalsService,
+    RevisionsService,
+    RecheckService,
+    RecomputePool,
+    DiscrepancyRevisionsService,
+  ],
   exports: [SubmittalsService],
 })
 export class SubmittalsModule {}

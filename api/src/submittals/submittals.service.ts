@@ -16,6 +16,10 @@ import type { AuthUser } from '../auth/auth-user.js';
 import { CalcFile } from '../calc-files/models/calc-file.model.js';
 import { appConfig, uploadsConfig } from '../config/index.js';
 import { OPEN_STATUSES } from '../discrepancies/discrepancy-status.js';
+import {
+  DiscrepancyRevisionsService,
+  type NewDiscrepancyRow,
+} from '../discrepancies/discrepancy-revisions.service.js';
 import { Discrepancy } from '../discrepancies/models/discrepancy.model.js';
 import { EventsService } from '../events/events.service.js';
 import { MailService } from '../mail/mail.service.js';
@@ -61,6 +65,7 @@ export class SubmittalsService {
     private readonly events: EventsService,
     private readonly pool: RecomputePool,
     private readonly mail: MailService,
+    private readonly carry: DiscrepancyRevisionsService,
   ) {}
 
   webPath(id: number): string {
@@ -127,6 +132,7 @@ export class SubmittalsService {
           viaTokenId: actor.token?.id ?? null,
           engineVersion,
           summary,
+          reconciled: true,
         },
         { transaction },
       );
@@ -145,7 +151,8 @@ export class SubmittalsService {
       }));
       await this.calcFiles.bulkCreate(fileRows, { transaction });
       const resultRows: ReturnType<typeof memberResultRow>[] = [];
-      const discrepancyRows: ReturnType<typeof discrepancyRow>[] = [];
+      const now = new Date();
+      const discrepancyRows: (ReturnType<typeof discrepancyRow> & NewDiscrepancyRow)[] = [];
       outcome.files.forEach((file, i) => {
         const calcFileId = firstFileId + i;
         for (const member of file.audit.members) {
@@ -153,18 +160,40 @@ export class SubmittalsService {
             memberResultRow({ submittalId: s.id, calcFileId }, file.document, file.audit, member),
           );
           for (const finding of member.findings) {
-            discrepancyRows.push(
-              discrepancyRow(
+            discrepancyRows.push({
+              ...discrepancyRow(
                 { projectId, submittalId: s.id, calcFileId, fileName: file.name },
                 finding,
                 file.document.profile.units,
               ),
-            );
+              firstRaisedAt: now,
+            });
           }
         }
       });
       await this.results.bulkCreate(resultRows, { transaction });
+      // Ids after MAX(id) are ours too, so a carried item's event can name the row it continues.
+      const firstDiscrepancyId =
+        ((await this.discrepancies.max<number, Discrepancy>('id', { transaction })) ?? 0) + 1;
+      discrepancyRows.forEach((row, i) => {
+        row.id = firstDiscrepancyId + i;
+      });
+      const plan =
+        dto.revisionOf === undefined
+          ? null
+          : await this.carry.plan(
+              { submittalId: s.id, projectId, revisionOfId: dto.revisionOf },
+              discrepancyRows,
+              fileRows.map((f) => ({
+                calcFileId: f.id,
+                fileName: f.fileName,
+                memberIds: f.memberIds,
+                content: f.content,
+              })),
+              transaction,
+            );
       await this.discrepancies.bulkCreate(discrepancyRows, { transaction });
+      const carried = plan ? await this.carry.apply(plan, null, transaction) : null;
       await this.events.record(
         {
           type: dto.revisionOf ? 'submittal.revised' : 'submittal.checked',
@@ -177,6 +206,7 @@ export class SubmittalsService {
             engineVersion,
             viaApiToken: Boolean(actor.token),
             ...summary.bySeverity,
+            ...(carried ?? {}),
           },
         },
         transaction,
@@ -239,10 +269,15 @@ export class SubmittalsService {
     return s;
   }
 
-  /** Error-severity discrepancies of the submittal still in an open status. */
+  /** Current error-severity discrepancies of the submittal still in an open status. */
   openErrors(submittalId: number, transaction?: Transaction): Promise<Discrepancy[]> {
     return this.discrepancies.findAll({
-      where: { submittalId, severity: 'error', status: { [Op.in]: [...OPEN_STATUSES] } },
+      where: {
+        submittalId,
+        severity: 'error',
+        status: { [Op.in]: [...OPEN_STATUSES] },
+        supersededBySubmittalId: null,
+      },
       order: [['id', 'ASC']],
       transaction,
     });
@@ -350,7 +385,9 @@ export class SubmittalsService {
 
   private async view(s: Submittal): Promise<SubmittalDto> {
     const [openDiscrepancies, revisions] = await Promise.all([
-      this.discrepancies.count({ where: { submittalId: s.id, status: { [Op.in]: [...OPEN_STATUSES] } } }),
+      this.discrepancies.count({
+        where: { submittalId: s.id, status: { [Op.in]: [...OPEN_STATUSES] }, supersededBySubmittalId: null },
+      }),
       this.submittals.findAll({ where: { revisionOfId: s.id }, attributes: ['id'], order: [['id', 'ASC']] }),
     ]);
     return {

@@ -74,6 +74,10 @@ export const router = createBrowserRouter([
       { path: paths.admin.path, lazy: guarded(() => import('@/features/admin/routes/admin'), ['admin']) },
       { path: paths.account.path, lazy: guarded(() => import('@/features/account/routes/account')) },
       { path: paths.mailbox.path, lazy: guarded(() => import('@/features/mailbox/routes/mailbox')) },
+      {
+        path: paths.notifications.path,
+        lazy: guarded(() => import('@/features/notifications/routes/notifications')),
+      },
       { path: '*', element: <NotFound /> },
     ],
   },

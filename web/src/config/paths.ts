@@ -54,4 +54,5 @@ export const paths = {
   admin: { path: '/admin', getHref: () => '/admin' },
   account: { path: '/account', getHref: () => '/account' },
   mailbox: { path: '/mailbox', getHref: () => '/mailbox' },
+  notifications: { path: '/notifications', getHref: () => '/notifications' },
 } as const;

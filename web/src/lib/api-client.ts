@@ -1,6 +1,6 @@
 import createClient, { type Middleware } from 'openapi-fetch';
 import { env } from '@/config/env';
-import { ApiError, toApiError } from './api-error';
+import { ApiError, describeError, errorTitle, toApiError } from './api-error';
 import type { paths } from './api-types';
 import { notify } from './notify';
 import { sessionStore } from './session';
@@ -68,7 +68,7 @@ async function failure(request: Request, response: Response): Promise<never> {
   }
   // Reads show their own error state in the view; a failed change is also toasted.
   if (request.method !== 'GET' && !isSignIn)
-    notify({ intent: 'error', title: error.error, body: error.message });
+    notify({ intent: 'error', title: errorTitle(error), body: describeError(error) });
   throw error;
 }
 

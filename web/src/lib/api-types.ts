@@ -575,6 +575,23 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  '/api/projects/{projectId}/discrepancies.csv': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** The discrepancies the list filters match, every page, as CSV (UTF-8 with BOM; quantity, unit and unit-system columns) */
+    get: operations['DiscrepanciesController_csv'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   '/api/projects/{projectId}/discrepancies/bulk-transition': {
     parameters: {
       query?: never;
@@ -619,14 +636,34 @@ export interface paths {
     get?: never;
     put?: never;
     /**
-     * Move a discrepancy: answered (consultant), accepted / returned / waived (checker)
-     * @description 403 wrong role for that move, 409 not allowed from the current status, 400 missing note or reason.
+     * Move a discrepancy: answered (consultant), accepted / returned / waived (checker); returned from accepted or waived reopens it (checker)
+     * @description 403 wrong role for that move, 409 not allowed from the current status, superseded, or changed by someone else meanwhile (details: the current status), 400 missing note or reason.
      */
     post: operations['DiscrepanciesController_move'];
     delete?: never;
     options?: never;
     head?: never;
     patch?: never;
+    trace?: never;
+  };
+  '/api/discrepancies/{discrepancyId}/assignment': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    /**
+     * Checker: set or clear the assignee (a consultant or checker of the project) and the due date
+     * @description 409 when someone else changed the item meanwhile or it is superseded; 422 for an assignee who cannot work on it.
+     */
+    patch: operations['DiscrepanciesController_assign'];
     trace?: never;
   };
   '/api/discrepancies/{discrepancyId}/comments': {
@@ -657,6 +694,92 @@ export interface paths {
     put?: never;
     /** Owner's rep: acknowledge a discrepancy (their only change; idempotent) */
     post: operations['DiscrepanciesController_acknowledge'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/notifications': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** Your notifications, newest first, with the unread count */
+    get: operations['NotificationsController_list'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/notifications/unread-count': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** How many of your notifications are unread (the count in the header) */
+    get: operations['NotificationsController_unread'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/notifications/read-all': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Mark every notification of yours read */
+    post: operations['NotificationsController_readAll'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/notifications/{notificationId}/read': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Mark one of your notifications read (404 for anyone else’s) */
+    post: operations['NotificationsController_read'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/notifications/settings': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** What you are told about, per kind: in the app and by mail */
+    get: operations['NotificationsController_settings'];
+    /** Turn kinds on or off, in the app and by mail */
+    put: operations['NotificationsController_updateSettings'];
+    post?: never;
     delete?: never;
     options?: never;
     head?: never;
@@ -859,7 +982,16 @@ export interface components {
     OutboxMessageDto: {
       id: number;
       /** @enum {string} */
-      kind: 'invitation' | 'submittal-checked' | 'discrepancy-answered' | 'submittal-stamped';
+      kind:
+        | 'invitation'
+        | 'submittal-checked'
+        | 'submittal-stamped'
+        | 'discrepancy-answered'
+        | 'discrepancy-returned'
+        | 'discrepancy-accepted'
+        | 'discrepancy-waived'
+        | 'discrepancy-reopened'
+        | 'discrepancy-assigned';
       to: string;
       subject: string;
       /** @enum {string} */
@@ -1289,6 +1421,10 @@ export interface components {
         [key: string]: unknown;
       };
     };
+    PersonDto: {
+      id: number;
+      name: string;
+    };
     DiscrepancyDto: {
       id: number;
       projectId: number;
@@ -1332,9 +1468,28 @@ export interface components {
       /** @description JSON pointer into the calc file */
       pointer: string;
       /** @enum {string} */
-      status: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived';
+      status: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived' | 'resolved';
+      /** @description Raised by every change; send it back with a move or an assignment to be told if someone else changed it first */
+      version: number;
       /** Format: date-time */
       acknowledgedAt: string | null;
+      /** @description Not superseded: no later revision has re-checked it */
+      current: boolean;
+      /** @description The revision that re-checked it (carried it on or resolved it) */
+      supersededBySubmittalId: number | null;
+      /** @description The item of the revised submittal it continues */
+      carriedFromId: number | null;
+      assignee: components['schemas']['PersonDto'] | null;
+      /**
+       * Format: date
+       * @example 2026-12-18
+       */
+      dueDate: string | null;
+      /**
+       * Format: date-time
+       * @description When the first submittal of its lineage raised it
+       */
+      firstRaisedAt: string;
       /** Format: date-time */
       createdAt: string;
       /** Format: date-time */
@@ -1358,11 +1513,31 @@ export interface components {
     };
     CommentViewDto: {
       id: number;
+      /** @description The item it was written on (this one or one it continues) */
+      discrepancyId: number;
       body: string;
       author: string;
       authorRole: string;
       /** Format: date-time */
       at: string;
+    };
+    LineageItemDto: {
+      id: number;
+      submittalId: number;
+      submittalTitle: string;
+      /** @enum {string} */
+      status: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived' | 'resolved';
+    };
+    MoveOptionDto: {
+      /** @enum {string} */
+      action: 'answer' | 'accept' | 'return' | 'waive' | 'reopen';
+      /**
+       * @description Where it lands
+       * @enum {string}
+       */
+      to: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived' | 'resolved';
+      /** @enum {string} */
+      requires: 'note-or-revision' | 'reason' | 'none';
     };
     DiscrepancyDetailDto: {
       id: number;
@@ -1407,33 +1582,140 @@ export interface components {
       /** @description JSON pointer into the calc file */
       pointer: string;
       /** @enum {string} */
-      status: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived';
+      status: 'raised' | 'answered' | 'accepted' | 'returned' | 'waived' | 'resolved';
+      /** @description Raised by every change; send it back with a move or an assignment to be told if someone else changed it first */
+      version: number;
       /** Format: date-time */
       acknowledgedAt: string | null;
+      /** @description Not superseded: no later revision has re-checked it */
+      current: boolean;
+      /** @description The revision that re-checked it (carried it on or resolved it) */
+      supersededBySubmittalId: number | null;
+      /** @description The item of the revised submittal it continues */
+      carriedFromId: number | null;
+      assignee: components['schemas']['PersonDto'] | null;
+      /**
+       * Format: date
+       * @example 2026-12-18
+       */
+      dueDate: string | null;
+      /**
+       * Format: date-time
+       * @description When the first submittal of its lineage raised it
+       */
+      firstRaisedAt: string;
       /** Format: date-time */
       createdAt: string;
       /** Format: date-time */
       updatedAt: string;
       raisedBy: string;
       submittalTitle: string;
-      /** @description Every move, comment and acknowledgement, oldest first */
+      /** @description Every move, comment and acknowledgement, oldest first, of this item and of those it continues */
       history: components['schemas']['EventDto'][];
+      /** @description Of this item and of those it continues */
       comments: components['schemas']['CommentViewDto'][];
+      /** @description This item and those it continues across revisions, oldest first */
+      lineage: components['schemas']['LineageItemDto'][];
+      /** @description The item that continues it, if carried on */
+      carriedInto: components['schemas']['LineageItemDto'] | null;
+      /** @example resolved by #2 */
+      resolution: string | null;
       /** @description Statuses the caller may move it to now */
-      allowedMoves: ('raised' | 'answered' | 'accepted' | 'returned' | 'waived')[];
+      allowedMoves: ('raised' | 'answered' | 'accepted' | 'returned' | 'waived' | 'resolved')[];
+      /** @description The moves the caller may make now, by name */
+      moves: components['schemas']['MoveOptionDto'][];
       /** @description Whether the caller may acknowledge it (owner’s rep, not yet acknowledged) */
       canAcknowledge: boolean;
+      /** @description Whether the caller may set the assignee and due date (checker, current item) */
+      canAssign: boolean;
+      /** @description Whether the caller may comment (consultant or checker, current item) */
+      canComment: boolean;
     };
     TransitionDto: {
-      /** @enum {string} */
+      /**
+       * @description returned from accepted or waived is the reopen move
+       * @enum {string}
+       */
       to: 'answered' | 'accepted' | 'returned' | 'waived';
-      /** @description answered: a note or a revision; returned and waived: the reason */
+      /** @description answered: a note or a revision; returned, waived and reopen: the reason */
       note?: string;
       /** @description answered: the submittal that revises this discrepancy’s submittal */
       revisionSubmittalId?: number;
+      /** @description The version the mover saw; when the item has changed since, 409 with its current status */
+      version?: number;
+    };
+    AssignDto: {
+      /** @description A consultant or checker of the project; null to clear; absent to keep */
+      assigneeId?: number | null;
+      /**
+       * Format: date
+       * @description A calendar day, YYYY-MM-DD; null to clear; absent to keep
+       * @example 2026-12-18
+       */
+      dueDate?: string | null;
+      /** @description The version the checker saw; when the item has changed since, 409 with its current status */
+      version?: number;
     };
     CreateCommentDto: {
       body: string;
+    };
+    NotificationActorDto: {
+      id: number;
+      name: string;
+      role: string;
+    };
+    NotificationDto: {
+      id: number;
+      /** @enum {string} */
+      kind: 'answered' | 'returned' | 'accepted' | 'waived' | 'reopened' | 'assigned';
+      /** @description What happened, in one line */
+      title: string;
+      /** @description Which item, and the note that came with it */
+      body: string;
+      /** @description Where the web app shows it, e.g. /discrepancies/12 */
+      webPath: string;
+      projectId: number | null;
+      submittalId: number | null;
+      discrepancyId: number | null;
+      actor: components['schemas']['NotificationActorDto'] | null;
+      /** Format: date-time */
+      readAt: string | null;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    NotificationPageDto: {
+      items: components['schemas']['NotificationDto'][];
+      total: number;
+      page: number;
+      pageSize: number;
+      /** @description Unread notifications in all */
+      unread: number;
+    };
+    UnreadCountDto: {
+      unread: number;
+    };
+    MarkedReadDto: {
+      /** @description How many were marked read now */
+      marked: number;
+    };
+    NotificationSettingDto: {
+      /** @enum {string} */
+      kind: 'answered' | 'returned' | 'accepted' | 'waived' | 'reopened' | 'assigned';
+      label: string;
+      description: string;
+      /** @description Shown in the app */
+      inApp: boolean;
+      /** @description Sent by mail */
+      mail: boolean;
+    };
+    NotificationSettingInput: {
+      /** @enum {string} */
+      kind: 'answered' | 'returned' | 'accepted' | 'waived' | 'reopened' | 'assigned';
+      inApp: boolean;
+      mail: boolean;
+    };
+    UpdateNotificationSettingsDto: {
+      settings: components['schemas']['NotificationSettingInput'][];
     };
     DashboardProjectDto: {
       id: number;
@@ -1460,13 +1742,16 @@ export interface components {
       date: string;
       /** @description Findings raised by this submittal */
       raised: number;
-      /** @description Of those, still open now */
+      /** @description Of those, still open now and not superseded by a later revision */
       open: number;
       bySeverity: components['schemas']['CountsBySeverityDto'];
     };
     DashboardDto: {
       projects: components['schemas']['DashboardProjectDto'][];
+      /** @description Open current items (raised, answered, returned) */
       openTotal: number;
+      /** @description Items a later revision re-checked (carried on or resolved); never counted as open */
+      superseded: number;
       openByClass: components['schemas']['CountsByClassDto'];
       openBySeverity: components['schemas']['CountsBySeverityDto'];
       openByAge: components['schemas']['AgeBucketsDto'];
@@ -2419,10 +2704,16 @@ export interface operations {
         class?: string[];
         /** @description Comma-separated: error, warning, note */
         severity?: string[];
-        /** @description Comma-separated: raised, answered, accepted, returned, waived, or "open" */
+        /** @description Comma-separated: raised, answered, accepted, returned, waived, resolved, or "open" */
         status?: string[];
         memberId?: string;
         code?: string;
+        /** @description Free text: matches the message, member, file, code, name or pointer (case-insensitive); "#12" or "12" also matches discrepancy 12 */
+        q?: string;
+        /** @description Only those assigned to this user */
+        assigneeId?: number;
+        /** @description Also items a later revision re-checked (carried on or resolved); by default only current ones */
+        includeSuperseded?: boolean;
         sort?:
           | 'id'
           | 'createdAt'
@@ -2432,7 +2723,9 @@ export interface operations {
           | 'status'
           | 'memberId'
           | 'code'
-          | 'fileName';
+          | 'fileName'
+          | 'submittalId'
+          | 'dueDate';
         order?: 'asc' | 'desc';
       };
       header?: never;
@@ -2449,6 +2742,58 @@ export interface operations {
         };
         content: {
           'application/json': components['schemas']['DiscrepancyPageDto'];
+        };
+      };
+    };
+  };
+  DiscrepanciesController_csv: {
+    parameters: {
+      query?: {
+        page?: number;
+        pageSize?: number;
+        submittalId?: number;
+        /** @description Comma-separated: overstated, understated, missed-chain, phantom-chain, chain-width, equal-share, detailing, input */
+        class?: string[];
+        /** @description Comma-separated: error, warning, note */
+        severity?: string[];
+        /** @description Comma-separated: raised, answered, accepted, returned, waived, resolved, or "open" */
+        status?: string[];
+        memberId?: string;
+        code?: string;
+        /** @description Free text: matches the message, member, file, code, name or pointer (case-insensitive); "#12" or "12" also matches discrepancy 12 */
+        q?: string;
+        /** @description Only those assigned to this user */
+        assigneeId?: number;
+        /** @description Also items a later revision re-checked (carried on or resolved); by default only current ones */
+        includeSuperseded?: boolean;
+        sort?:
+          | 'id'
+          | 'createdAt'
+          | 'updatedAt'
+          | 'severity'
+          | 'class'
+          | 'status'
+          | 'memberId'
+          | 'code'
+          | 'fileName'
+          | 'submittalId'
+          | 'dueDate';
+        order?: 'asc' | 'desc';
+      };
+      header?: never;
+      path: {
+        projectId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'text/csv': string;
         };
       };
     };
@@ -2524,6 +2869,31 @@ export interface operations {
       };
     };
   };
+  DiscrepanciesController_assign: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        discrepancyId: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['AssignDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['DiscrepancyDetailDto'];
+        };
+      };
+    };
+  };
   DiscrepanciesController_comment: {
     parameters: {
       query?: never;
@@ -2566,6 +2936,131 @@ export interface operations {
         };
         content: {
           'application/json': components['schemas']['DiscrepancyDetailDto'];
+        };
+      };
+    };
+  };
+  NotificationsController_list: {
+    parameters: {
+      query?: {
+        page?: number;
+        pageSize?: number;
+        /** @description Only unread ones */
+        unread?: boolean;
+      };
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['NotificationPageDto'];
+        };
+      };
+    };
+  };
+  NotificationsController_unread: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['UnreadCountDto'];
+        };
+      };
+    };
+  };
+  NotificationsController_readAll: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['MarkedReadDto'];
+        };
+      };
+    };
+  };
+  NotificationsController_read: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        notificationId: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['NotificationDto'];
+        };
+      };
+    };
+  };
+  NotificationsController_settings: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['NotificationSettingDto'][];
+        };
+      };
+    };
+  };
+  NotificationsController_updateSettings: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateNotificationSettingsDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['NotificationSettingDto'][];
         };
       };
     };

@@ -2,6 +2,7 @@ import { initialSchema } from './0001-initial-schema.js';
 import { discrepancySeverityIndex } from './0002-discrepancy-severity-index.js';
 import { discrepancyTallies } from './0003-discrepancy-tallies.js';
 import { versionsAndHeartbeat } from './0004-versions-and-heartbeat.js';
+import { revisionsAssignmentsNotifications } from './0005-revisions-assignments-notifications.js';
 import { sessionsAndInvitationRevocation } from './0006-sessions-and-invitation-revocation.js';
 import { discrepancyUnits } from './0007-discrepancy-units.js';
 
@@ -11,6 +12,7 @@ export const migrations = [
   discrepancySeverityIndex,
   discrepancyTallies,
   versionsAndHeartbeat,
+  revisionsAssignmentsNotifications,
   sessionsAndInvitationRevocation,
   discrepancyUnits,
 ];

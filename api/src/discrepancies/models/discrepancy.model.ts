@@ -1,4 +1,4 @@
-import { Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
+import { BelongsTo, Column, DataType, ForeignKey, Model, Table } from 'sequelize-typescript';
 import type { Dimension, FindingClass, Severity, UnitSystem } from 'ligament';
 import { CalcFile } from '../../calc-files/models/calc-file.model.js';
 import { Project } from '../../projects/models/project.model.js';
@@ -38,4 +38,15 @@ export class Discrepancy extends Model {
   @Column({ type: DataType.DATE, allowNull: true }) declare acknowledgedAt: Date | null;
   @ForeignKey(() => User) @Column({ type: DataType.INTEGER, allowNull: true }) declare acknowledgedById:
     number | null;
+  /** The item of the revised submittal this one continues (migration 0005; see discrepancy-identity.ts). */
+  @Column({ type: DataType.INTEGER, allowNull: true }) declare carriedFromId: number | null;
+  /** The revision that re-checked this item (carried it on or resolved it); null while current. */
+  @Column({ type: DataType.INTEGER, allowNull: true }) declare supersededBySubmittalId: number | null;
+  /** When the first submittal of its lineage raised it: a carried item is as old as its first raise. */
+  @Column({ type: DataType.DATE, allowNull: false, defaultValue: DataType.NOW }) declare firstRaisedAt: Date;
+  @ForeignKey(() => User) @Column({ type: DataType.INTEGER, allowNull: true }) declare assigneeId:
+    number | null;
+  @BelongsTo(() => User, 'assigneeId') declare assignee?: User;
+  /** YYYY-MM-DD, a calendar day with no time zone. */
+  @Column({ type: DataType.STRING, allowNull: true }) declare dueDate: string | null;
 }

@@ -1,4 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
+import { MAIL_KINDS } from '../models/outbox-message.model.js';
 
 export class MailboxMessageDto {
   @ApiProperty() id: number;
@@ -11,8 +12,7 @@ export class MailboxMessageDto {
 
 export class OutboxMessageDto {
   @ApiProperty() id: number;
-  @ApiProperty({ enum: ['invitation', 'submittal-checked', 'discrepancy-answered', 'submittal-stamped'] })
-  kind: string;
+  @ApiProperty({ enum: MAIL_KINDS }) kind: string;
   @ApiProperty() to: string;
   @ApiProperty() subject: string;
   @ApiProperty({ enum: ['pending', 'sent'] }) status: string;

@@ -1,6 +1,17 @@
 import { Column, DataType, Model, Table } from 'sequelize-typescript';
 
-export type MailKind = 'invitation' | 'submittal-checked' | 'discrepancy-answered' | 'submittal-stamped';
+export const MAIL_KINDS = [
+  'invitation',
+  'submittal-checked',
+  'submittal-stamped',
+  'discrepancy-answered',
+  'discrepancy-returned',
+  'discrepancy-accepted',
+  'discrepancy-waived',
+  'discrepancy-reopened',
+  'discrepancy-assigned',
+] as const;
+export type MailKind = (typeof MAIL_KINDS)[number];
 export type OutboxStatus = 'pending' | 'sent';
 
 @Table({ tableName: 'mail_outbox' })

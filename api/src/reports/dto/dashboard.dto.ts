@@ -33,13 +33,18 @@ export class TrendPointDto {
   @ApiProperty() title: string;
   @ApiProperty({ format: 'date-time' }) date: string;
   @ApiProperty({ description: 'Findings raised by this submittal' }) raised: number;
-  @ApiProperty({ description: 'Of those, still open now' }) open: number;
+  @ApiProperty({ description: 'Of those, still open now and not superseded by a later revision' })
+  open: number;
   @ApiProperty({ type: CountsBySeverityDto }) bySeverity: CountsBySeverityDto;
 }
 
 export class DashboardDto {
   @ApiProperty({ type: [DashboardProjectDto] }) projects: DashboardProjectDto[];
-  @ApiProperty() openTotal: number;
+  @ApiProperty({ description: 'Open current items (raised, answered, returned)' }) openTotal: number;
+  @ApiProperty({
+    description: 'Items a later revision re-checked (carried on or resolved); never counted as open',
+  })
+  superseded: number;
   @ApiProperty({ type: CountsByClassDto }) openByClass: CountsByClassDto;
   @ApiProperty({ type: CountsBySeverityDto }) openBySeverity: CountsBySeverityDto;
   @ApiProperty({ type: AgeBucketsDto }) openByAge: AgeBucketsDto;

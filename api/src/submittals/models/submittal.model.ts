@@ -33,4 +33,6 @@ export class Submittal extends Model {
   @Column({ type: DataType.DATE, allowNull: true }) declare stampedAt: Date | null;
   /** Raised by the stamp: the stamp is a compare-and-set on (unstamped, version) (migration 0004). */
   @Column({ type: DataType.INTEGER, allowNull: false, defaultValue: 0 }) declare version: number;
+  /** Whether the items of the submittal it revises have been carried across (migration 0005). */
+  @Column({ type: DataType.BOOLEAN, allowNull: false, defaultValue: false }) declare reconciled: boolean;
 }

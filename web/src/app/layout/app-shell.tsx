@@ -23,6 +23,7 @@ import {
 import { Suspense, useState, type KeyboardEvent } from 'react';
 import { NavLink, Outlet, useLocation, useMatches, useNavigate } from 'react-router-dom';
 import { LogoMark } from '@/components/logo-mark';
+import { NotificationBell } from '@/features/notifications/components/notification-bell';
 import { LoadingState } from '@/components/states';
 import { CAUTION } from 'ligament/engine';
 import { paths } from '@/config/paths';
@@ -239,6 +240,7 @@ export function AppShell() {
               onClick={toggle}
             />
           </Tooltip>
+          {session && <NotificationBell signedIn />}
           {session && (
             <Menu>
               <MenuTrigger disableButtonEnhancement>

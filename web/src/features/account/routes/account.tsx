@@ -23,6 +23,7 @@ import { useTokens } from '../api/get-tokens';
 import { useRevokeToken } from '../api/revoke-token';
 import { CiSnippet } from '../components/ci-snippet';
 import { CreateTokenForm } from '../components/create-token-form';
+import { NotificationSettings } from '../components/notification-settings';
 
 const useStyles = makeStyles({
   facts: {
@@ -59,6 +60,9 @@ export function Component() {
             on the server, for every tab.
           </span>
         </div>
+      </Section>
+      <Section title="Notifications" labelId="notifications-heading">
+        <NotificationSettings />
       </Section>
       {isConsultant ? (
         <>

@@ -1,28 +1,19 @@
 import { useMutation } from '@tanstack/react-query';
-import { apiUrl, authHeaders } from '@/lib/api-client';
-import { toApiError } from '@/lib/api-error';
+import { describeError } from '@/lib/api-error';
+import { downloadFromApi } from '@/lib/download';
 import { notify } from '@/lib/notify';
 
-/** Fetches the CSV with the session's token and hands it to the browser as a download. */
-export async function downloadOpenCsv(): Promise<number> {
-  const response = await fetch(apiUrl('/api/dashboard/open-discrepancies.csv'), { headers: authHeaders() });
-  if (!response.ok)
-    throw toApiError(response.status, response.statusText, await response.json().catch(() => null));
-  const blob = await response.blob();
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = `open-discrepancies-${new Date().toISOString().slice(0, 10)}.csv`;
-  document.body.append(link);
-  link.click();
-  link.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
-  return blob.size;
+/** Every current open discrepancy of the user's projects, as the CSV the API builds. */
+export function downloadOpenCsv(): Promise<number> {
+  return downloadFromApi(
+    '/api/dashboard/open-discrepancies.csv',
+    `open-discrepancies-${new Date().toISOString().slice(0, 10)}.csv`,
+  );
 }
 
 export function useDownloadOpenCsv() {
   return useMutation({
     mutationFn: downloadOpenCsv,
-    onError: (error) => notify({ intent: 'error', title: 'The export failed', body: error.message }),
+    onError: (error) => notify({ intent: 'error', title: 'The export failed', body: describeError(error) }),
   });
 }

@@ -17,11 +17,14 @@ export interface TrendChartProps {
   readonly trend: readonly Schema<'TrendPointDto'>[];
 }
 
-/** Per submittal, by date: findings raised, and how many of those are still open. */
+/**
+ * Per submittal, by date: findings raised, and how many of those are still open (current items only:
+ * one a later revision carried on counts under that revision).
+ */
 export function TrendChart({ trend }: TrendChartProps) {
   const styles = useStyles();
   const data = trend.map((t) => ({
-    label: `#${t.submittalId} ${formatDate(t.date)}`,
+    label: `#${t.submittalId} · ${formatDate(t.date)}`,
     raised: t.raised,
     open: t.open,
   }));
@@ -33,8 +36,12 @@ export function TrendChart({ trend }: TrendChartProps) {
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={data} margin={{ top: 8, right: 16, bottom: 8, left: 0 }}>
           <CartesianGrid stroke={tokens.colorNeutralStroke2} strokeDasharray="3 3" vertical={false} />
+          {/* The first and the last point always carry their label (recharts would drop the first to
+              keep the last when labels crowd), and the padding keeps both inside the chart. */}
           <XAxis
             dataKey="label"
+            interval="preserveStartEnd"
+            padding={{ left: 40, right: 40 }}
             tick={{ fill: tokens.colorNeutralForeground2 }}
             stroke={tokens.colorNeutralStroke1}
           />

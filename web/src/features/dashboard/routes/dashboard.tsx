@@ -39,6 +39,9 @@ const useStyles = makeStyles({
     '@media (max-width: 1100px)': { gridTemplateColumns: 'minmax(0, 1fr)' },
   },
   num: { textAlign: 'right', fontVariantNumeric: 'tabular-nums' },
+  // A header cell lays its text out in a flex box of its own: right-align that too, so each number
+  // sits under its header.
+  numHeader: { justifyContent: 'flex-end', textAlign: 'right', width: '100%' },
   ages: {
     display: 'grid',
     gridTemplateColumns: 'repeat(4, minmax(0, 1fr))',
@@ -87,7 +90,16 @@ export function Component() {
         }
       />
       <div className={styles.tiles}>
-        <KpiTile label="Open" value={d.openTotal} detail="raised, answered or returned" testId="kpi-open" />
+        <KpiTile
+          label="Open"
+          value={d.openTotal}
+          detail={
+            d.superseded > 0
+              ? `raised, answered or returned; ${d.superseded} taken over by later revisions not counted`
+              : 'raised, answered or returned'
+          }
+          testId="kpi-open"
+        />
         <KpiTile
           label="Serious (errors)"
           value={d.openBySeverity.error}
@@ -118,9 +130,15 @@ export function Component() {
                 <TableHeader>
                   <TableRow>
                     <TableHeaderCell>Project</TableHeaderCell>
-                    <TableHeaderCell className={styles.num}>Submittals</TableHeaderCell>
-                    <TableHeaderCell className={styles.num}>Open</TableHeaderCell>
-                    <TableHeaderCell className={styles.num}>Errors</TableHeaderCell>
+                    <TableHeaderCell className={styles.num} button={{ className: styles.numHeader }}>
+                      Submittals
+                    </TableHeaderCell>
+                    <TableHeaderCell className={styles.num} button={{ className: styles.numHeader }}>
+                      Open
+                    </TableHeaderCell>
+                    <TableHeaderCell className={styles.num} button={{ className: styles.numHeader }}>
+                      Errors
+                    </TableHeaderCell>
                   </TableRow>
                 </TableHeader>
                 <TableBody>

@@ -29,7 +29,13 @@ export function useBulkMoveDiscrepancies(projectId: number) {
       void queryClient.invalidateQueries({ queryKey: ['projects'] });
       void queryClient.invalidateQueries({ queryKey: ['submittals'] });
       void queryClient.invalidateQueries({ queryKey: ['dashboard'] });
-      notify({ intent: 'success', title: `${result.moved} discrepancies ${input.to}` });
+      void queryClient.invalidateQueries({ queryKey: ['notifications'] });
+      notify({
+        intent: 'success',
+        title: `${result.moved} discrepanc${result.moved === 1 ? 'y' : 'ies'} ${
+          { accepted: 'accepted', returned: 'returned to the consultant', waived: 'waived' }[input.to]
+        }`,
+      });
     },
   });
 }

@@ -26,3 +26,8 @@ export function useRevisionCandidates(projectId: number, submittalId: number, en
         .sort((a, b) => b.createdAt.localeCompare(a.createdAt)),
   });
 }
+
+/** The project's submittals, newest first (the list's submittal filter and column). */
+export function useProjectSubmittals(projectId: number | undefined) {
+  return useQuery({ ...getProjectSubmittalsQueryOptions(projectId ?? 0), enabled: projectId !== undefined });
+}

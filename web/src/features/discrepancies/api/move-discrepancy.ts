@@ -31,7 +31,8 @@ export const moveInputSchema = z
   });
 export type MoveInput = z.infer<typeof moveInputSchema>;
 
-export async function moveDiscrepancy(discrepancyId: number, input: MoveInput) {
+/** A move, and the version of the item the mover saw (the API refuses it if someone changed it since). */
+export async function moveDiscrepancy(discrepancyId: number, input: MoveInput & { version?: number }) {
   return unwrap(
     await api.POST('/api/discrepancies/{discrepancyId}/transitions', {
       params: { path: { discrepancyId } },
@@ -41,22 +42,36 @@ export async function moveDiscrepancy(discrepancyId: number, input: MoveInput) {
         ...(input.to === 'answered' && input.revisionSubmittalId !== undefined
           ? { revisionSubmittalId: input.revisionSubmittalId }
           : {}),
+        ...(input.version !== undefined ? { version: input.version } : {}),
       },
     }),
   );
 }
 
+/** What the toast says a move did, by the move's name (a reopen lands on returned, but is a reopen). */
+const DONE: Record<string, string> = {
+  answer: 'Answer sent',
+  accept: 'Answer accepted',
+  return: 'Returned to the consultant',
+  waive: 'Waived',
+  reopen: 'Reopened: back with the consultant',
+};
+
 export function useMoveDiscrepancy(discrepancyId: number, projectId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: MoveInput) => moveDiscrepancy(discrepancyId, input),
-    onSuccess: (_, input) => {
+    // `action` names the move for the toast; the API is told only where it goes (`to`).
+    mutationFn: (input: MoveInput & { action?: string; version?: number }) =>
+      moveDiscrepancy(discrepancyId, input),
+    onSuccess: (detail, input) => {
+      queryClient.setQueryData(['discrepancy', discrepancyId], detail);
       void queryClient.invalidateQueries({ queryKey: ['discrepancy', discrepancyId] });
       void queryClient.invalidateQueries({ queryKey: ['discrepancies', projectId] });
       void queryClient.invalidateQueries({ queryKey: ['projects'] });
       void queryClient.invalidateQueries({ queryKey: ['submittals'] });
       void queryClient.invalidateQueries({ queryKey: ['dashboard'] });
-      notify({ intent: 'success', title: `Discrepancy ${input.to}` });
+      void queryClient.invalidateQueries({ queryKey: ['notifications'] });
+      notify({ intent: 'success', title: DONE[input.action ?? ''] ?? `Moved to ${input.to}` });
     },
   });
 }

@@ -29,15 +29,28 @@ const base: Detail = {
   message: 'Claimed An 6.000 in² exceeds the recomputed 5.125 in² (chain A1-B1, −x) by 17.1 %',
   pointer: '/members/0/claims/An',
   status: 'raised',
+  version: 0,
   acknowledgedAt: null,
+  current: true,
+  supersededBySubmittalId: null,
+  carriedFromId: null,
+  assignee: null,
+  dueDate: null,
+  firstRaisedAt: '2026-12-01T09:00:00.000Z',
   createdAt: '2026-12-01T09:00:00.000Z',
   updatedAt: '2026-12-01T09:00:00.000Z',
   raisedBy: 'Priya Halvorsen',
   submittalTitle: 'Issue C — deck plates',
   history: [],
   comments: [],
+  lineage: [],
+  carriedInto: null,
+  resolution: null,
   allowedMoves: [],
+  moves: [],
   canAcknowledge: false,
+  canAssign: false,
+  canComment: false,
 };
 
 let shown: Detail = base;
@@ -47,9 +60,7 @@ vi.mock('../api/get-discrepancy', () => ({
 
 function claimedAndRecomputed(detail: Detail): string | null {
   shown = detail;
-  const { unmount } = renderWithProviders(
-    <DiscrepancyDetail discrepancyId={detail.id} projectId={1} canComment={false} />,
-  );
+  const { unmount } = renderWithProviders(<DiscrepancyDetail discrepancyId={detail.id} projectId={1} />);
   const text = screen.getByText('Claimed · recomputed').nextElementSibling?.textContent ?? null;
   unmount();
   return text;

@@ -1,6 +1,7 @@
 import { Badge } from '@fluentui/react-components';
 import {
   CheckmarkCircleRegular,
+  CheckmarkStarburstRegular,
   ArrowReplyRegular,
   ArrowUndoRegular,
   CircleRegular,
@@ -8,7 +9,7 @@ import {
 } from '@fluentui/react-icons';
 import type { ReactElement } from 'react';
 
-export type DiscrepancyStatus = 'raised' | 'answered' | 'accepted' | 'returned' | 'waived';
+export type DiscrepancyStatus = 'raised' | 'answered' | 'accepted' | 'returned' | 'waived' | 'resolved';
 
 export const STATUSES: readonly DiscrepancyStatus[] = [
   'raised',
@@ -16,6 +17,7 @@ export const STATUSES: readonly DiscrepancyStatus[] = [
   'returned',
   'accepted',
   'waived',
+  'resolved',
 ];
 export const OPEN_STATUSES: readonly DiscrepancyStatus[] = ['raised', 'answered', 'returned'];
 
@@ -25,6 +27,7 @@ export const statusLabels: Record<DiscrepancyStatus, string> = {
   returned: 'Returned',
   accepted: 'Accepted',
   waived: 'Waived',
+  resolved: 'Resolved',
 };
 
 const appearance: Record<
@@ -36,6 +39,7 @@ const appearance: Record<
   returned: { color: 'warning', icon: <ArrowUndoRegular /> },
   accepted: { color: 'success', icon: <CheckmarkCircleRegular /> },
   waived: { color: 'subtle', icon: <SubtractCircleRegular /> },
+  resolved: { color: 'success', icon: <CheckmarkStarburstRegular /> },
 };
 
 export interface StatusBadgeProps {

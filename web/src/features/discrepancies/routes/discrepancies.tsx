@@ -13,6 +13,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import {
+  ArrowDownloadRegular,
   ChevronLeftRegular,
   ChevronRightRegular,
   DismissRegular,
@@ -20,14 +21,16 @@ import {
 } from '@fluentui/react-icons';
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
-import { useSearchParams } from 'react-router-dom';
+import { useLocation, useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
 import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 import { useSession } from '@/lib/session';
+import { useDownloadDiscrepanciesCsv } from '../api/download-discrepancies-csv';
 import { useDiscrepancies, type DiscrepancyFilters } from '../api/get-discrepancies';
 import { getDiscrepancyQueryOptions } from '../api/get-discrepancy';
 import { useDiscrepancyProjects } from '../api/get-discrepancy-projects';
+import { useProjectSubmittals } from '../api/get-revision-candidates';
 import { BulkMoveBar } from '../components/bulk-move-bar';
 import { DiscrepancyDetail } from '../components/discrepancy-detail';
 import { DiscrepancyFilters as FiltersBar, type FilterValues } from '../components/discrepancy-filters';
@@ -61,6 +64,14 @@ const useStyles = makeStyles({
   },
   pagerButtons: { display: 'flex', flexWrap: 'wrap', alignItems: 'center', gap: tokens.spacingHorizontalS },
   picker: { maxWidth: '420px', marginBottom: tokens.spacingVerticalL },
+  listTools: {
+    display: 'flex',
+    justifyContent: 'space-between',
+    alignItems: 'center',
+    flexWrap: 'wrap',
+    gap: tokens.spacingHorizontalS,
+    marginBottom: tokens.spacingVerticalS,
+  },
 });
 
 const SORTS: readonly DiscrepancyFilters['sort'][] = [
@@ -73,6 +84,8 @@ const SORTS: readonly DiscrepancyFilters['sort'][] = [
   'memberId',
   'code',
   'fileName',
+  'submittalId',
+  'dueDate',
 ];
 /** Wide enough for the grid and the detail side by side; narrower, the detail opens as a drawer over the grid. */
 const WIDE_QUERY = '(min-width: 1400px)';
@@ -94,14 +107,14 @@ export function Component() {
   const styles = useStyles();
   const role = useSession()?.user.role;
   const [params, setParams] = useSearchParams();
+  const location = useLocation();
   const projects = useDiscrepancyProjects();
   const [selected, setSelected] = useState<Set<number>>(new Set());
   const [activeId, setActiveId] = useState<number | null>(null);
   const queryClient = useQueryClient();
   /**
-   * Opens a discrepancy's details once they have loaded. A drawer that opens on a spinner has nothing
-   * to take focus; its focus trap then stays inactive and hides the drawer from screen readers and
-   * the keyboard, moves and all.
+   * Opens a discrepancy's details once they have loaded, so the panel or drawer opens on the detail
+   * itself, with its move buttons, rather than on a spinner.
    */
   const openDetail = (id: number) =>
     void queryClient.prefetchQuery(getDiscrepancyQueryOptions(id)).then(() => setActiveId(id));
@@ -116,21 +129,29 @@ export function Component() {
     severity: list(params.get('severity')),
     memberId: params.get('memberId') ?? '',
     code: params.get('code') ?? '',
+    q: params.get('q') ?? '',
+    includeSuperseded: params.get('includeSuperseded') === 'true',
     sort: sortParam && SORTS.includes(sortParam) ? sortParam : 'severity',
     order: params.get('order') === 'desc' ? 'desc' : 'asc',
     page: Math.max(1, Number(params.get('page') ?? 1) || 1),
     pageSize: [25, 50, 100].includes(Number(params.get('pageSize'))) ? Number(params.get('pageSize')) : 25,
   };
   const discrepancies = useDiscrepancies(projectId, filters);
+  const submittals = useProjectSubmittals(projectId);
+  const csv = useDownloadDiscrepanciesCsv(projectId, filters);
 
   const update = (
-    next: Record<string, string | readonly string[] | number | undefined>,
+    next: Record<string, string | readonly string[] | number | boolean | undefined>,
     resetPage = true,
   ) => {
     const p = new URLSearchParams(params);
     if (projectId !== undefined) p.set('projectId', String(projectId));
     for (const [key, value] of Object.entries(next)) {
-      const text = Array.isArray(value) ? value.join(',') : value === undefined ? '' : String(value);
+      const text = Array.isArray(value)
+        ? value.join(',')
+        : value === undefined || value === false
+          ? ''
+          : String(value);
       if (text === '' && key !== 'status') p.delete(key);
       else p.set(key, text);
     }
@@ -140,6 +161,9 @@ export function Component() {
   };
 
   const filterValues: FilterValues = {
+    q: filters.q ?? '',
+    submittalId: filters.submittalId,
+    includeSuperseded: filters.includeSuperseded ?? false,
     status: filters.status ?? [],
     class: filters.class ?? [],
     severity: filters.severity ?? [],
@@ -149,18 +173,20 @@ export function Component() {
   const total = discrepancies.data?.total ?? 0;
   const pages = Math.max(1, Math.ceil(total / filters.pageSize));
   const project = projects.data?.find((p) => p.id === projectId);
+  const submittalTitles = new Map((submittals.data ?? []).map((s) => [s.id, s.title]));
+  const items = discrepancies.data?.items ?? [];
+  const selectedRows = items.filter((d) => selected.has(d.id));
 
   const open = activeId !== null && projectId !== undefined;
-  const detailPanel = (closable: boolean) =>
-    open ? (
-      <DiscrepancyDetail
-        key={activeId}
-        discrepancyId={activeId}
-        projectId={projectId}
-        {...(closable ? { onClose: () => setActiveId(null) } : {})}
-        canComment={role === 'checker' || role === 'consultant'}
-      />
-    ) : null;
+  const detailPanel = open ? (
+    <DiscrepancyDetail
+      key={activeId}
+      discrepancyId={activeId}
+      projectId={projectId}
+      onClose={wide ? () => setActiveId(null) : undefined}
+      onOpenOther={setActiveId}
+    />
+  ) : null;
 
   if (projects.isPending) return <LoadingState label="Loading your projects…" />;
   if (projects.isError) return <ErrorState error={projects.error} onRetry={() => void projects.refetch()} />;
@@ -199,97 +225,124 @@ export function Component() {
       </Field>
       <div className={mergeClasses(styles.layout, open && wide && styles.layoutWithDetail)}>
         <Section>
-          <FiltersBar
-            values={filterValues}
-            onChange={(next) => update(next)}
-            onClear={() => {
-              setParams(new URLSearchParams(projectId ? { projectId: String(projectId), status: '' } : {}), {
-                replace: true,
-              });
-              setSelected(new Set());
-            }}
-          />
-          {filters.submittalId && (
-            <Button
-              size="small"
-              onClick={() => update({ submittalId: undefined })}
-              style={{ marginBottom: tokens.spacingVerticalS }}
-            >
-              Showing submittal #{filters.submittalId} only — show all
-            </Button>
-          )}
-          {role === 'checker' && selected.size > 0 && projectId !== undefined && (
-            <BulkMoveBar
-              projectId={projectId}
-              selectedIds={[...selected]}
-              onDone={() => setSelected(new Set())}
+          {/* Says while a new page is on its way, so a reader (and a test) knows the rows may change. */}
+          <div
+            data-testid="discrepancy-list"
+            aria-busy={discrepancies.isFetching}
+            // The address whose rows are shown: empty while the rows of the previous one stay on screen.
+            data-search={discrepancies.isSuccess && !discrepancies.isPlaceholderData ? location.search : ''}
+          >
+            <FiltersBar
+              values={filterValues}
+              submittals={submittals.data ?? []}
+              onChange={(next) => update(next)}
+              onClear={() => {
+                setParams(
+                  new URLSearchParams(projectId ? { projectId: String(projectId), status: '' } : {}),
+                  {
+                    replace: true,
+                  },
+                );
+                setSelected(new Set());
+              }}
             />
-          )}
-          {discrepancies.isPending ? (
-            <LoadingState label="Loading discrepancies…" />
-          ) : discrepancies.isError ? (
-            <ErrorState error={discrepancies.error} onRetry={() => void discrepancies.refetch()} />
-          ) : discrepancies.data.items.length === 0 ? (
-            <EmptyState title="Nothing matches these filters" icon={<DocumentBulletListRegular />}>
-              {filters.status?.includes('open')
-                ? 'No open discrepancies: every one has been accepted or waived, or none were raised.'
-                : 'Try other filters.'}
-            </EmptyState>
-          ) : (
-            <>
-              <DiscrepancyGrid
-                items={discrepancies.data.items}
-                sort={filters.sort}
-                order={filters.order}
-                onSort={(sort, order) => update({ sort, order })}
-                selectable={role === 'checker'}
-                selected={selected}
-                onSelect={setSelected}
-                activeId={activeId}
-                onOpen={openDetail}
-              />
-              <nav className={styles.pager} aria-label="Pages">
-                <Text>
-                  {total} discrepanc{total === 1 ? 'y' : 'ies'} · page {filters.page} of {pages}
-                  {discrepancies.isFetching ? ' · updating…' : ''}
+            <div className={styles.listTools}>
+              {filters.submittalId ? (
+                <Button size="small" onClick={() => update({ submittalId: undefined })}>
+                  Showing submittal #{filters.submittalId} only — show all
+                </Button>
+              ) : (
+                <Text size={200}>
+                  {filters.includeSuperseded
+                    ? 'Every item, with those a later revision carried on or resolved.'
+                    : 'Current items only: a later revision’s carried and resolved items are counted where they are now.'}
                 </Text>
-                <div className={styles.pagerButtons}>
-                  <Dropdown
-                    aria-label="Rows per page"
-                    value={`${filters.pageSize} per page`}
-                    selectedOptions={[String(filters.pageSize)]}
-                    onOptionSelect={(_, d) => update({ pageSize: d.optionValue })}
-                    style={{ minWidth: '140px' }}
-                  >
-                    {[25, 50, 100].map((n) => (
-                      <Option key={n} value={String(n)} text={`${n} per page`}>
-                        {`${n} per page`}
-                      </Option>
-                    ))}
-                  </Dropdown>
-                  <Button
-                    icon={<ChevronLeftRegular />}
-                    disabled={filters.page <= 1}
-                    onClick={() => update({ page: filters.page - 1 }, false)}
-                  >
-                    Previous
-                  </Button>
-                  <Button
-                    icon={<ChevronRightRegular />}
-                    iconPosition="after"
-                    disabled={filters.page >= pages}
-                    onClick={() => update({ page: filters.page + 1 }, false)}
-                  >
-                    Next
-                  </Button>
-                </div>
-              </nav>
-            </>
-          )}
+              )}
+              <Button
+                icon={<ArrowDownloadRegular />}
+                onClick={() => csv.mutate()}
+                disabled={csv.isPending || total === 0 || projectId === undefined}
+              >
+                {csv.isPending ? 'Exporting…' : `Export ${total} as CSV`}
+              </Button>
+            </div>
+            {role === 'checker' && selectedRows.length > 0 && projectId !== undefined && (
+              <BulkMoveBar
+                projectId={projectId}
+                selected={selectedRows}
+                onDone={() => setSelected(new Set())}
+                onNarrow={setSelected}
+              />
+            )}
+            {discrepancies.isPending ? (
+              <LoadingState label="Loading discrepancies…" />
+            ) : discrepancies.isError ? (
+              <ErrorState error={discrepancies.error} onRetry={() => void discrepancies.refetch()} />
+            ) : discrepancies.data.items.length === 0 ? (
+              <EmptyState title="Nothing matches these filters" icon={<DocumentBulletListRegular />}>
+                {filters.q
+                  ? `Nothing matches “${filters.q}” with these filters.`
+                  : filters.status?.includes('open')
+                    ? 'No open discrepancies: every one has been accepted, waived or resolved, or none were raised.'
+                    : 'Try other filters.'}
+              </EmptyState>
+            ) : (
+              <>
+                <DiscrepancyGrid
+                  items={discrepancies.data.items}
+                  sort={filters.sort}
+                  order={filters.order}
+                  onSort={(sort, order) => update({ sort, order })}
+                  selectable={role === 'checker'}
+                  selected={selected}
+                  onSelect={setSelected}
+                  activeId={activeId}
+                  onOpen={openDetail}
+                  submittalTitles={submittalTitles}
+                />
+                <nav className={styles.pager} aria-label="Pages">
+                  <Text>
+                    {total} discrepanc{total === 1 ? 'y' : 'ies'} · page {filters.page} of {pages}
+                    {discrepancies.isFetching ? ' · updating…' : ''}
+                  </Text>
+                  <div className={styles.pagerButtons}>
+                    <Dropdown
+                      aria-label="Rows per page"
+                      value={`${filters.pageSize} per page`}
+                      selectedOptions={[String(filters.pageSize)]}
+                      onOptionSelect={(_, d) => update({ pageSize: d.optionValue })}
+                      style={{ minWidth: '140px' }}
+                    >
+                      {[25, 50, 100].map((n) => (
+                        <Option key={n} value={String(n)} text={`${n} per page`}>
+                          {`${n} per page`}
+                        </Option>
+                      ))}
+                    </Dropdown>
+                    <Button
+                      icon={<ChevronLeftRegular />}
+                      disabled={filters.page <= 1}
+                      onClick={() => update({ page: filters.page - 1 }, false)}
+                    >
+                      Previous
+                    </Button>
+                    <Button
+                      icon={<ChevronRightRegular />}
+                      iconPosition="after"
+                      disabled={filters.page >= pages}
+                      onClick={() => update({ page: filters.page + 1 }, false)}
+                    >
+                      Next
+                    </Button>
+                  </div>
+                </nav>
+              </>
+            )}
+          </div>
         </Section>
         {open && wide && (
           <aside className={styles.detail} aria-label="Discrepancy details" data-testid="discrepancy-aside">
-            <Section>{detailPanel(true)}</Section>
+            <Section>{detailPanel}</Section>
           </aside>
         )}
       </div>
@@ -303,28 +356,23 @@ export function Component() {
           }}
           aria-label="Discrepancy details"
         >
-          {/*
-            The header's close button is there from the first frame, while the detail still loads: the
-            drawer's initial focus lands on it, inside the modal, and stays there when the detail
-            arrives. With nothing focusable at first, focus fell on the drawer's own surface, which the
-            focus trap (tabster's modalizer) does not count as inside, so now and then the drawer stayed
-            aria-hidden: its buttons were unreachable by role, to screen readers and to the browser run.
-          */}
+          {/* The header's close button is there from the first frame, so the drawer opens with focus on
+              it (not on the drawer itself while the detail loads) and its modal keeps it readable. */}
           <DrawerHeader>
             <DrawerHeaderTitle
               action={
                 <Button
                   appearance="subtle"
-                  icon={<DismissRegular />}
                   aria-label="Close the details"
+                  icon={<DismissRegular />}
                   onClick={() => setActiveId(null)}
                 />
               }
             >
-              Discrepancy details
+              Discrepancy #{activeId}
             </DrawerHeaderTitle>
           </DrawerHeader>
-          <DrawerBody className={styles.drawerBody}>{detailPanel(false)}</DrawerBody>
+          <DrawerBody className={styles.drawerBody}>{detailPanel}</DrawerBody>
         </OverlayDrawer>
       )}
     </>

@@ -3,7 +3,6 @@ import { PageHeader } from '@/components/page-header';
 import { Section } from '@/components/section';
 import { ErrorState, LoadingState } from '@/components/states';
 import { paths } from '@/config/paths';
-import { useSession } from '@/lib/session';
 import { useDiscrepancy } from '../api/get-discrepancy';
 import { DiscrepancyDetail } from '../components/discrepancy-detail';
 
@@ -11,7 +10,6 @@ import { DiscrepancyDetail } from '../components/discrepancy-detail';
 export function Component() {
   const discrepancyId = Number(useParams().discrepancyId);
   const navigate = useNavigate();
-  const role = useSession()?.user.role;
   const detail = useDiscrepancy(discrepancyId);
   if (detail.isPending) return <LoadingState label="Loading the discrepancy…" />;
   if (detail.isError) return <ErrorState error={detail.error} onRetry={() => void detail.refetch()} />;
@@ -27,7 +25,6 @@ export function Component() {
           discrepancyId={discrepancyId}
           projectId={detail.data.projectId}
           onClose={() => navigate(paths.discrepancies.getHref({ projectId: detail.data.projectId }))}
-          canComment={role === 'checker' || role === 'consultant'}
         />
       </Section>
     </>

@@ -13,13 +13,19 @@ async function getEventsPage(projectId: number, page: number) {
 
 /**
  * One page of the project's event log. The API pages oldest first; `page: 'latest'` asks for the
- * count and then the last page, so the activity view opens on what just happened.
+ * count and then the last page, so the activity view opens on what just happened. A last page
+ * holding only a few events is topped up from the one before, so the view opens on a full page.
  */
 export async function getProjectEvents(projectId: number, page: number | 'latest') {
   if (page !== 'latest') return getEventsPage(projectId, page);
   const first = await getEventsPage(projectId, 1);
   const last = Math.max(1, Math.ceil(first.total / EVENTS_PAGE_SIZE));
-  return last === 1 ? first : getEventsPage(projectId, last);
+  if (last === 1) return first;
+  const [before, latest] = await Promise.all([
+    last === 2 ? first : getEventsPage(projectId, last - 1),
+    getEventsPage(projectId, last),
+  ]);
+  return { ...latest, items: [...before.items, ...latest.items].slice(-EVENTS_PAGE_SIZE) };
 }
 
 export const getProjectEventsQueryOptions = (projectId: number, page: number | 'latest') =>

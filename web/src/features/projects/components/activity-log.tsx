@@ -7,7 +7,7 @@ import { paths } from '@/config/paths';
 import { formatDateTime } from '@/lib/format';
 import { roleLabel } from '@/lib/roles';
 import { EVENTS_PAGE_SIZE, useProjectEvents } from '../api/get-project-events';
-import { describeEvent } from './describe-event';
+import { describeEvent, groupEvents } from './describe-event';
 
 const useStyles = makeStyles({
   list: {
@@ -67,10 +67,11 @@ export function ActivityLog({ projectId }: ActivityLogProps) {
   return (
     <>
       <ol className={styles.list} aria-label="Project activity, newest first" data-testid="activity-log">
-        {[...items].reverse().map((e) => (
+        {groupEvents([...items].reverse()).map(({ event: e, count }) => (
           <li key={e.id} className={styles.item}>
             <Text block>
-              <span className={styles.who}>{e.actor ? e.actor.name : 'Ligament'}</span> {describeEvent(e)}
+              <span className={styles.who}>{e.actor ? e.actor.name : 'Ligament'}</span>{' '}
+              {describeEvent(e, count)}
             </Text>
             <Text className={styles.meta}>
               {formatDateTime(e.at)}
@@ -81,7 +82,7 @@ export function ActivityLog({ projectId }: ActivityLogProps) {
                   <Link to={paths.submittal.getHref(e.submittalId)}>submittal #{e.submittalId}</Link>
                 </>
               )}
-              {e.discrepancyId && (
+              {e.discrepancyId && count === 1 && (
                 <>
                   {' · '}
                   <Link to={paths.discrepancy.getHref(e.discrepancyId)}>discrepancy #{e.discrepancyId}</Link>

@@ -14,9 +14,42 @@ const stampWords: Record<string, string> = {
   rejected: 'rejected',
 };
 
+/** Events a revision writes one per item; the log shows a run of them as one line. */
+const GROUPED = new Set(['discrepancy.carried', 'discrepancy.resolved']);
+
+/** A line of the log: an event, or a run of `count` like events of one revision (the first stands for them). */
+export interface LogEntry<E> {
+  readonly event: E;
+  readonly count: number;
+}
+
+/**
+ * Folds runs of carried or resolved events of the same revision (in the given order) into one
+ * entry each, so a revision of 40 items is one line, not 40.
+ */
+export function groupEvents<E extends Pick<ProjectEvent, 'type' | 'data' | 'actor'>>(
+  events: readonly E[],
+): LogEntry<E>[] {
+  const out: { event: E; count: number }[] = [];
+  for (const e of events) {
+    const last = out.at(-1);
+    if (
+      last &&
+      GROUPED.has(e.type) &&
+      last.event.type === e.type &&
+      last.event.data.revisionSubmittalId === e.data.revisionSubmittalId &&
+      (last.event.actor?.id ?? null) === (e.actor?.id ?? null)
+    )
+      last.count += 1;
+    else out.push({ event: e, count: 1 });
+  }
+  return out;
+}
+
 /** One line of the activity log, in words, without the actor (the view shows who separately). */
 export function describeEvent(
   event: Pick<ProjectEvent, 'type' | 'data' | 'submittalId' | 'discrepancyId'>,
+  many = 1,
 ): string {
   const d = event.data;
   const submittal = event.submittalId ? `submittal #${event.submittalId}` : 'a submittal';
@@ -34,9 +67,15 @@ export function describeEvent(
         .filter(Boolean)
         .join(', ');
       const revises = num(d.revisionOf) ? ` as a revision of #${num(d.revisionOf)}` : '';
+      const carried = [
+        count(num(d.carried), 'item carried on', 'items carried on'),
+        count(num(d.resolved), 'resolved', 'resolved'),
+      ]
+        .filter(Boolean)
+        .join(', ');
       return `submitted ${submittal}${str(d.title) ? ` “${str(d.title)}”` : ''}${revises}${
         d.viaApiToken === true ? ' from CI' : ''
-      }${findings ? `: ${findings}` : ''}`;
+      }${findings ? `: ${findings}` : ''}${carried ? `; ${carried}` : ''}`;
     }
     case 'submittal.stamped':
       return `stamped ${submittal} “${stampWords[str(d.action) ?? ''] ?? str(d.action) ?? '?'}”${
@@ -62,6 +101,23 @@ export function describeEvent(
     case 'discrepancy.returned':
     case 'discrepancy.waived':
       return `${event.type.slice('discrepancy.'.length)} ${discrepancy}${d.bulk === true ? ' (bulk)' : ''}${quoted}`;
+    case 'discrepancy.reopened':
+      return `reopened ${discrepancy} (back to the consultant)${quoted}`;
+    case 'discrepancy.resolved':
+      return many > 1
+        ? `closed ${many} discrepancies: ${str(d.reason) ?? 'resolved by a revision'}`
+        : `closed ${discrepancy}: ${str(d.reason) ?? 'resolved by a revision'}`;
+    case 'discrepancy.carried': {
+      const into = num(d.revisionSubmittalId) ? ` into submittal #${num(d.revisionSubmittalId)}` : '';
+      if (many > 1) return `carried ${many} discrepancies${into}`;
+      return `carried ${discrepancy}${into}${str(d.reason) ? ` and raised it again (${str(d.reason)})` : ''}`;
+    }
+    case 'discrepancy.assigned': {
+      const due = str(d.dueDate) ? `, due ${str(d.dueDate)}` : '';
+      return str(d.assigneeName)
+        ? `assigned ${discrepancy} to ${str(d.assigneeName)}${due}`
+        : `took the assignee off ${discrepancy}${due}`;
+    }
     case 'discrepancy.commented':
       return `commented on ${discrepancy}`;
     case 'discrepancy.acknowledged':

@@ -1,13 +1,16 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, unwrap } from '@/lib/api-client';
 
-/** Every discrepancy a submittal raised (one page of up to 500), for the member panels and the report. */
+/**
+ * Every discrepancy a submittal raised (one page of up to 500), for the member panels and the report:
+ * with those a later revision carried on or resolved, since they are this submittal's record.
+ */
 export async function getSubmittalDiscrepancies(projectId: number, submittalId: number) {
   return unwrap(
     await api.GET('/api/projects/{projectId}/discrepancies', {
       params: {
         path: { projectId },
-        query: { submittalId, pageSize: 500, page: 1, sort: 'id', order: 'asc' },
+        query: { submittalId, pageSize: 500, page: 1, sort: 'id', order: 'asc', includeSuperseded: true },
       },
     }),
   );

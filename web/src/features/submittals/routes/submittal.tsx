@@ -136,7 +136,8 @@ export function Component() {
     return <ErrorState error={submittal.error} onRetry={() => void submittal.refetch()} />;
   const s = submittal.data;
   const openErrors = (discrepancies.data?.items ?? []).filter(
-    (d) => d.severity === 'error' && ['raised', 'answered', 'returned'].includes(d.status),
+    // As the stamp counts them: current items only (a later revision's carried ones are counted there).
+    (d) => d.current && d.severity === 'error' && ['raised', 'answered', 'returned'].includes(d.status),
   ).length;
   const selected = tab ?? (files.data?.[0] ? `file-${files.data[0].id}` : null);
 

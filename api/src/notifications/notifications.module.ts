@@ -1,0 +1,16 @@
+import { Module } from '@nestjs/common';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { MailModule } from '../mail/mail.module.js';
+import { ProjectMember } from '../projects/models/project-member.model.js';
+import { Notification } from './models/notification.model.js';
+import { NotificationSetting } from './models/notification-setting.model.js';
+import { NotificationsController } from './notifications.controller.js';
+import { NotificationsService } from './notifications.service.js';
+
+@Module({
+  imports: [SequelizeModule.forFeature([Notification, NotificationSetting, ProjectMember]), MailModule],
+  controllers: [NotificationsController],
+  providers: [NotificationsService],
+  exports: [NotificationsService],
+})
+export class NotificationsModule {}
