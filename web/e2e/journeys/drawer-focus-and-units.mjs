@@ -2,7 +2,7 @@
 // the detail opens in a modal drawer that must take the focus and stay reachable (it once stayed
 // aria-hidden when it opened before the detail had loaded), and claimed and recomputed carry their
 // file's unit. Runs after the review loop, as the checker it leaves signed in, on its submittal.
-import { PEOPLE, expect } from '../session.mjs';
+import { expect } from '../session.mjs';
 
 /**
  * @param {{ runner: ReturnType<typeof import('../harness.mjs').createRunner>,
@@ -10,17 +10,17 @@ import { PEOPLE, expect } from '../session.mjs';
  *   state: { projectId?: number, submittalId?: number } }} ctx
  */
 export default async function drawerFocusAndUnits({ runner, session, state }) {
-  const { page, shot, signIn } = session;
+  const { page, server, shot } = session;
 
   await runner.step(
     'at 390 px the discrepancy drawer takes the focus and writes numbers with units',
     async () => {
       await page.setViewportSize({ width: 390, height: 844 });
-      // A fresh page: the detail the step before left open in the wide layout would reopen here as
-      // the drawer (the list keeps its open row across navigations within the page).
-      await signIn(
-        PEOPLE.checker,
-        `/discrepancies?projectId=${state.projectId}&submittalId=${state.submittalId}&code=LG101&status=`,
+      // A fresh page load (the session survives it): the detail the step before left open in the
+      // wide layout would otherwise reopen here as the drawer (the list keeps its open row across
+      // navigations within the page).
+      await page.goto(
+        `${server.baseUrl}/discrepancies?projectId=${state.projectId}&submittalId=${state.submittalId}&code=LG101&status=`,
       );
       const row = page.getByTestId('discrepancy-row').filter({ hasText: 'SP-1' }).first();
       await row.getByRole('button', { name: /Open LG101 .* details/ }).click();
@@ -45,7 +45,8 @@ export default async function drawerFocusAndUnits({ runner, session, state }) {
       await shot('28-discrepancy-drawer-390');
       await drawer.getByRole('button', { name: 'Close the details' }).click();
       await drawer.waitFor({ state: 'detached' });
-      await page.setViewportSize({ width: 1280, height: 860 });
     },
   );
+  // Whatever happened above, the journeys after this one start at desktop width.
+  await page.setViewportSize({ width: 1280, height: 860 });
 }
