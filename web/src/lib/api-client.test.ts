@@ -1,5 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { api, setUnauthorizedHandler, unwrap } from './api-client';
+import { api, authHeaders, setUnauthorizedHandler, unwrap } from './api-client';
 import { ApiError } from './api-error';
 import { sessionStore } from './session';
 
@@ -126,5 +126,18 @@ describe('api client', () => {
       .catch((e: unknown) => e);
     expect(failure).toBeInstanceOf(ApiError);
     expect(failure).toMatchObject({ statusCode: 409, message: 'Already stamped.', details: [{ id: 4 }] });
+  });
+
+  it('gives raw downloads and uploads a token renewed first when it is about to run out', async () => {
+    const refresh = stubRefresh(() => renewed('jwt-2'));
+    sessionStore.set({ token: 'jwt-1', user: PRIYA, expiresAt: Date.now() + 10_000 });
+    expect(await authHeaders()).toEqual({ Authorization: 'Bearer jwt-2' });
+    expect(refresh).toHaveBeenCalledTimes(1);
+    // A token with time left is sent as it is.
+    sessionStore.set({ token: 'jwt-3', user: PRIYA, expiresAt: Date.now() + 10 * 60_000 });
+    expect(await authHeaders()).toEqual({ Authorization: 'Bearer jwt-3' });
+    expect(refresh).toHaveBeenCalledTimes(1);
+    sessionStore.clear();
+    expect(await authHeaders()).toEqual({});
   });
 });

@@ -19,6 +19,15 @@ const RENEW_AHEAD_MS = 60_000;
 /** Copies of requests sent with a session, kept until their answer, to send once more after a renewal. */
 const retries = new Map<string, Request>();
 
+/** The signed-in session, renewed first when its access token is about to run out; null when signed out. */
+async function liveSession() {
+  const session = sessionStore.get();
+  if (!session) return null;
+  if (session.expiresAt !== undefined && session.expiresAt - Date.now() < RENEW_AHEAD_MS)
+    return (await renewSession()) ?? session;
+  return session;
+}
+
 const withToken = (request: Request, token: string): Request => {
   request.headers.set('Authorization', `Bearer ${token}`);
   return request;
@@ -26,10 +35,9 @@ const withToken = (request: Request, token: string): Request => {
 
 const middleware: Middleware = {
   async onRequest({ request, id }) {
-    let session = sessionStore.get();
-    if (!session || request.headers.has('Authorization')) return request;
-    if (session.expiresAt !== undefined && session.expiresAt - Date.now() < RENEW_AHEAD_MS)
-      session = (await renewSession()) ?? session;
+    if (request.headers.has('Authorization')) return request;
+    const session = await liveSession();
+    if (!session) return request;
     withToken(request, session.token);
     retries.set(id, request.clone());
     return request;
@@ -86,10 +94,14 @@ export function unwrap<T>(result: { data?: T; error?: unknown; response: Respons
   return result.data as T;
 }
 
-/** Raw fetch with the session's token, for what openapi-fetch cannot do (CSV download, upload progress). */
-export function authHeaders(): Record<string, string> {
-  const token = sessionStore.get()?.token;
-  return token ? { Authorization: `Bearer ${token}` } : {};
+/**
+ * The session's Authorization header for what openapi-fetch cannot do (CSV download, upload
+ * progress, the server's report), renewed first as the client's own requests are, so a page left
+ * open past the access token's life still downloads and uploads.
+ */
+export async function authHeaders(): Promise<Record<string, string>> {
+  const session = await liveSession();
+  return session ? { Authorization: `Bearer ${session.token}` } : {};
 }
 
 export function apiUrl(path: string): string {

@@ -18,7 +18,7 @@ export function saveBlob(blob: Blob, fileName: string): void {
  * `fileName`. Returns its size in bytes; a refusal becomes an ApiError in the user's words.
  */
 export async function downloadFromApi(path: string, fileName: string): Promise<number> {
-  const response = await fetch(apiUrl(path), { headers: authHeaders() });
+  const response = await fetch(apiUrl(path), { headers: await authHeaders() });
   if (!response.ok)
     throw toApiError(response.status, response.statusText, await response.json().catch(() => null));
   const blob = await response.blob();

@@ -5,7 +5,9 @@ import { notify } from '@/lib/notify';
 
 /** The server's own HTML review report, fetched with the session's token and opened in a new tab. */
 export async function openServerReport(submittalId: number): Promise<void> {
-  const response = await fetch(apiUrl(`/api/submittals/${submittalId}/report`), { headers: authHeaders() });
+  const response = await fetch(apiUrl(`/api/submittals/${submittalId}/report`), {
+    headers: await authHeaders(),
+  });
   if (!response.ok)
     throw toApiError(response.status, response.statusText, await response.json().catch(() => null));
   const url = URL.createObjectURL(await response.blob());

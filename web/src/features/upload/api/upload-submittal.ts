@@ -28,10 +28,19 @@ export function uploadSubmittal(
   if (input.revisionOf !== undefined) form.append('revisionOf', String(input.revisionOf));
   for (const file of input.files) form.append('files', file, file.name);
 
+  return authHeaders().then((headers) => send(projectId, form, headers, onProgress));
+}
+
+function send(
+  projectId: number,
+  form: FormData,
+  headers: Record<string, string>,
+  onProgress: (fraction: number) => void,
+): Promise<UploadResult> {
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', apiUrl(`/api/projects/${projectId}/submittals`));
-    for (const [name, value] of Object.entries(authHeaders())) xhr.setRequestHeader(name, value);
+    for (const [name, value] of Object.entries(headers)) xhr.setRequestHeader(name, value);
     xhr.responseType = 'json';
     xhr.upload.onprogress = (event) => {
       if (event.lengthComputable) onProgress(event.loaded / event.total);
