@@ -4,7 +4,7 @@
  */
 import type { RunReport } from '../runner/types.js';
 import { CAUTION } from '../engine/caution.js';
-import { formatQuantity } from '../engine/index.js';
+import { SEVERITIES, formatQuantity } from '../engine/index.js';
 import { chainLabel, fileUnits, isFailing, plural, position, strengthSymbol, totalsLine } from './common.js';
 
 /** Escapes text for a Markdown table cell or list item. */
@@ -68,8 +68,7 @@ export function formatMarkdown(report: RunReport): string {
       const chains = r.directions
         .map((d) => `${d.direction} ${d.governing ? md(chainLabel(d.governing.holes)) : 'none'}`)
         .join('<br>');
-      const counts = (['error', 'warning', 'note'] as const)
-        .map((s) => [s, m.findings.filter((f) => f.severity === s).length] as const)
+      const counts = SEVERITIES.map((s) => [s, m.findings.filter((f) => f.severity === s).length] as const)
         .filter(([, n]) => n > 0)
         .map(([s, n]) => `${n} ${s}${n === 1 ? '' : 's'}`)
         .join(', ');

@@ -9,6 +9,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { SearchRegular } from '@fluentui/react-icons';
+import { SEVERITIES } from 'ligament/engine';
 import { FINDING_CLASSES, findingClassLabels } from '@/lib/finding-classes';
 import { STATUSES, statusLabels } from './status-badge';
 
@@ -50,8 +51,6 @@ export interface DiscrepancyFiltersProps {
   readonly onChange: (next: Partial<FilterValues>) => void;
   readonly onClear: () => void;
 }
-
-const SEVERITIES = ['error', 'warning', 'note'] as const;
 
 function MultiSelect({
   label,
