@@ -2,7 +2,7 @@
 // free port, drives Debian's Chromium through playwright-core, records console errors, and keeps
 // a tally of passed and failed steps.
 import { spawn } from 'node:child_process';
-import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -141,6 +141,9 @@ export function createRunner({ onFailure } = {}) {
   let failed = 0;
   const failures = [];
   mkdirSync(artifacts, { recursive: true });
+  // A failure kept by an earlier run would read as this run's.
+  for (const name of readdirSync(artifacts))
+    if (name.startsWith('failed-')) rmSync(join(artifacts, name), { force: true });
   const keep = async (name) => {
     if (!onFailure) return '';
     const stem = `failed-${String(failures.length).padStart(2, '0')}-${slug(name)}`;
