@@ -3,7 +3,6 @@ import { InjectModel } from '@nestjs/sequelize';
 import type { FindingClass, Severity } from 'ligament';
 import { Op } from 'sequelize';
 import { csvDocument } from '../common/csv.js';
-import { HotReadsService } from '../database/hot-reads.service.js';
 import { quantityCells } from '../discrepancies/quantity.js';
 import type { AuthUser } from '../auth/auth-user.js';
 import { ProjectAccessService } from '../auth/project-access.service.js';
@@ -27,7 +26,6 @@ export class DashboardService {
     @InjectModel(Discrepancy) private readonly discrepancies: typeof Discrepancy,
     @InjectModel(Submittal) private readonly submittals: typeof Submittal,
     @InjectModel(Project) private readonly projects: typeof Project,
-    private readonly reads: HotReadsService,
     private readonly access: ProjectAccessService,
   ) {}
 
@@ -149,15 +147,6 @@ export class DashboardService {
         raw: true,
       }),
     ]);
-    const fileIds = [...new Set(rows.map((d) => d.calcFileId))];
-    const files = fileIds.length
-      ? await this.reads.all<{ id: number; units: string | null }>(
-          `SELECT id, json_extract(document, '$.profile.units') AS units FROM calc_files
-           WHERE id IN (${fileIds.map(() => '?').join(', ')})`,
-          fileIds,
-        )
-      : [];
-    const unitsOf = new Map(files.map((f) => [f.id, f.units]));
     const names = new Map(projects.map((p) => [p.id, p.name]));
     const header = [
       'project',
@@ -181,7 +170,6 @@ export class DashboardService {
       'message',
     ];
     const lines = rows.map((d) => {
-      const units = unitsOf.get(d.calcFileId) ?? null;
       return [
         names.get(d.projectId),
         d.submittalId,
@@ -194,8 +182,8 @@ export class DashboardService {
         d.severity,
         d.status,
         d.chain ? d.chain.split(',').join(' ') : '',
-        ...quantityCells(d, units),
-        units,
+        ...quantityCells(d, d.units),
+        d.units,
         Math.floor((now.getTime() - new Date(d.firstRaisedAt).getTime()) / DAY),
         new Date(d.firstRaisedAt).toISOString(),
         d.message,
