@@ -1,5 +1,6 @@
 import type { Drawing } from 'ligament/draw';
 import { toSvg } from 'ligament/draw';
+import { saveBlob } from '@/lib/download';
 
 /** Resolution of the PNG download: fine enough to print the sheet at its size. */
 export const PNG_DPI = 200;
@@ -9,20 +10,9 @@ export function drawingFileStem(drawing: Drawing): string {
   return `${drawing.memberId.replace(/[^A-Za-z0-9._-]+/g, '-')}-drawing`;
 }
 
-function save(blob: Blob, name: string): void {
-  const url = URL.createObjectURL(blob);
-  const link = document.createElement('a');
-  link.href = url;
-  link.download = name;
-  document.body.append(link);
-  link.click();
-  link.remove();
-  setTimeout(() => URL.revokeObjectURL(url), 1000);
-}
-
 /** The drawing as the SVG file `ligament draw` writes (the same serialiser), sized in millimetres. */
 export function downloadSvg(drawing: Drawing): void {
-  save(new Blob([toSvg(drawing)], { type: 'image/svg+xml' }), `${drawingFileStem(drawing)}.svg`);
+  saveBlob(new Blob([toSvg(drawing)], { type: 'image/svg+xml' }), `${drawingFileStem(drawing)}.svg`);
 }
 
 /** The pixel size of the PNG: the sheet's millimetres at PNG_DPI. */
@@ -48,5 +38,5 @@ export async function downloadPng(drawing: Drawing): Promise<void> {
   context.drawImage(image, 0, 0, width, height);
   const blob = await new Promise<Blob | null>((resolve) => canvas.toBlob(resolve, 'image/png'));
   if (!blob) throw new Error('This browser could not encode the PNG.');
-  save(blob, `${drawingFileStem(drawing)}.png`);
+  saveBlob(blob, `${drawingFileStem(drawing)}.png`);
 }
