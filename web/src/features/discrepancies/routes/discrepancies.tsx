@@ -19,7 +19,6 @@ import {
   DismissRegular,
   DocumentBulletListRegular,
 } from '@fluentui/react-icons';
-import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { useLocation, useSearchParams } from 'react-router-dom';
 import { PageHeader } from '@/components/page-header';
@@ -28,7 +27,6 @@ import { EmptyState, ErrorState, LoadingState } from '@/components/states';
 import { useSession } from '@/lib/session';
 import { useDownloadDiscrepanciesCsv } from '../api/download-discrepancies-csv';
 import { useDiscrepancies, type DiscrepancyFilters } from '../api/get-discrepancies';
-import { getDiscrepancyQueryOptions } from '../api/get-discrepancy';
 import { useDiscrepancyProjects } from '../api/get-discrepancy-projects';
 import { useProjectSubmittals } from '../api/get-revision-candidates';
 import { BulkMoveBar } from '../components/bulk-move-bar';
@@ -111,13 +109,6 @@ export function Component() {
   const projects = useDiscrepancyProjects();
   const [selected, setSelected] = useState<Set<number>>(new Set());
   const [activeId, setActiveId] = useState<number | null>(null);
-  const queryClient = useQueryClient();
-  /**
-   * Opens a discrepancy's details once they have loaded, so the panel or drawer opens on the detail
-   * itself, with its move buttons, rather than on a spinner.
-   */
-  const openDetail = (id: number) =>
-    void queryClient.prefetchQuery(getDiscrepancyQueryOptions(id)).then(() => setActiveId(id));
   const wide = useWideLayout();
 
   const projectId = params.get('projectId') ? Number(params.get('projectId')) : projects.data?.[0]?.id;
@@ -297,7 +288,7 @@ export function Component() {
                   selected={selected}
                   onSelect={setSelected}
                   activeId={activeId}
-                  onOpen={openDetail}
+                  onOpen={setActiveId}
                   submittalTitles={submittalTitles}
                 />
                 <nav className={styles.pager} aria-label="Pages">
