@@ -1,5 +1,7 @@
+import { getModelToken } from '@nestjs/sequelize';
 import request from 'supertest';
 import { MailService } from '../src/mail/mail.service.js';
+import { OutboxMessage } from '../src/mail/models/outbox-message.model.js';
 import { SmtpFakeService } from '../src/mail/smtp-fake.service.js';
 import { bearer, bootApp, calcFile, EMAIL, login, type TestApp } from './helpers.js';
 
@@ -39,6 +41,31 @@ describe('outbox with retry', () => {
     expect((await mailbox()).map((m) => m.subject)).toEqual(
       expect.arrayContaining([expect.stringContaining('Submittal checked'), 'You are invited to Ligament']),
     );
+  });
+
+  it('health stays ok while a claimed message is on its way, and degrades once a send has failed', async () => {
+    const messages = t.app.get<typeof OutboxMessage>(getModelToken(OutboxMessage));
+    // As the outbox leaves a message it has claimed: the attempt counted, no error yet.
+    const inFlight = await messages.create({
+      kind: 'invitation',
+      to: 'wren.halloway@larchmont-review.example.test',
+      subject: 'On its way',
+      text: 'Claimed by the outbox, not yet sent.',
+      status: 'pending',
+      attempts: 1,
+      lastError: null,
+      nextAttemptAt: new Date(Date.now() + 60_000),
+    });
+    expect((await request(t.http).get('/api/health')).body).toMatchObject({
+      status: 'ok',
+      mail: { ok: true, pending: 1, lastError: null },
+    });
+    await inFlight.update({ lastError: 'connect ECONNREFUSED 127.0.0.1:2525' });
+    expect((await request(t.http).get('/api/health')).body).toMatchObject({
+      status: 'degraded',
+      mail: { ok: false, lastError: 'connect ECONNREFUSED 127.0.0.1:2525' },
+    });
+    await inFlight.destroy();
   });
 
   it('an SMTP outage never fails the request; the mail waits and goes out when SMTP is back', async () => {

@@ -124,7 +124,9 @@ export class MailService implements OnApplicationBootstrap, BeforeApplicationShu
         raw: true,
       }) as Promise<{ count: number; oldest: string | null } | null>,
       this.outbox.findOne({
-        where: { status: 'pending', attempts: { [Op.gt]: 0 } },
+        // A send that failed leaves its error; one claimed and still on its way has none (the
+        // claim counts the attempt before sending), so it is not failing.
+        where: { status: 'pending', attempts: { [Op.gt]: 0 }, lastError: { [Op.ne]: null } },
         attributes: ['lastError'],
         order: [['updatedAt', 'DESC']],
         raw: true,
